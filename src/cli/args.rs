@@ -1,0 +1,112 @@
+//! Argument types for every subcommand, in one place so `--help` and the README agree.
+
+use clap::{Args, Parser, Subcommand};
+use std::path::PathBuf;
+
+/// rheoside: flow curves, line and tank answers for thick products, journalled per shift.
+#[derive(Debug, Parser)]
+#[command(name = "rheoside", version, about)]
+pub struct Cli {
+    #[command(subcommand)]
+    pub command: Option<Command>,
+
+    /// Site config (TOML). Default: the bundled demo site.
+    #[arg(long, global = true, value_name = "FILE")]
+    pub site: Option<PathBuf>,
+
+    /// Continue an earlier session from its journal file.
+    #[arg(long, value_name = "JOURNAL")]
+    pub resume: Option<PathBuf>,
+
+    /// Folder for session journals (default: logs/, or RHEOSIDE_LOG_DIR).
+    #[arg(long, global = true, value_name = "DIR", env = "RHEOSIDE_LOG_DIR")]
+    pub log_dir: Option<PathBuf>,
+
+    /// Operator name for the journal (default: the OS user).
+    #[arg(long, global = true)]
+    pub operator: Option<String>,
+
+    /// Plain ASCII borders and chart marks, for terminals without line drawing.
+    #[arg(long)]
+    pub ascii: bool,
+}
+
+#[derive(Debug, Subcommand)]
+pub enum Command {
+    /// Fit flow curves to viscometer readings from a CSV file.
+    Fit(FitArgs),
+    /// Validate a site config and print a summary of its equipment.
+    CheckSite(CheckSiteArgs),
+    /// Append readings or a note to a session journal (headless).
+    Record(RecordArgs),
+    /// Shift handover report from one or more journals.
+    Report(ReportArgs),
+    /// A product's fitted constants over past sessions, against its spec limits.
+    Trend(TrendArgs),
+}
+
+#[derive(Debug, Args)]
+pub struct FitArgs {
+    /// CSV with header `rpm,dial` or `shear_rate,shear_stress` (SI), optional `temperature`.
+    pub file: PathBuf,
+    /// Viscometer geometry when the CSV holds rpm and dial readings.
+    #[arg(long, value_name = "NAME")]
+    pub geometry: Option<String>,
+    /// Viscometer id from the site config (with --site).
+    #[arg(long, value_name = "ID")]
+    pub viscometer: Option<String>,
+    /// auto, newtonian, power-law, bingham, herschel-bulkley or casson.
+    #[arg(long, default_value = "auto")]
+    pub model: String,
+    /// Use the Newtonian (Margules) shear rate instead of the n-corrected one.
+    #[arg(long)]
+    pub no_rate_correction: bool,
+    /// `relative` weights each point by 1/stress, for data spanning decades.
+    #[arg(long, value_name = "WEIGHT")]
+    pub weight: Option<String>,
+    /// One JSON object on stdout, SI units.
+    #[arg(long)]
+    pub json: bool,
+}
+
+#[derive(Debug, Args)]
+pub struct CheckSiteArgs {
+    /// Site config (TOML).
+    pub file: PathBuf,
+}
+
+#[derive(Debug, Args)]
+pub struct RecordArgs {
+    /// Equipment id from the site config.
+    #[arg(long)]
+    pub equipment: String,
+    /// A reading as `NAME=VALUE UNIT`, e.g. `discharge=6.2 bar`; repeat for several.
+    #[arg(long = "reading", value_name = "NAME=VALUE UNIT")]
+    pub readings: Vec<String>,
+    /// A free-text note.
+    #[arg(long)]
+    pub note: Option<String>,
+    /// Append to this session file instead of starting a new one.
+    #[arg(long, value_name = "FILE")]
+    pub session: Option<PathBuf>,
+}
+
+#[derive(Debug, Args)]
+pub struct ReportArgs {
+    /// Journal files.
+    #[arg(required = true)]
+    pub journals: Vec<PathBuf>,
+    /// md, csv or json.
+    #[arg(long, default_value = "md")]
+    pub format: String,
+}
+
+#[derive(Debug, Args)]
+pub struct TrendArgs {
+    /// Product name from the site config.
+    #[arg(long)]
+    pub product: String,
+    /// How far back, e.g. 30d, 12h, 8w.
+    #[arg(long, default_value = "30d")]
+    pub since: String,
+}

@@ -1,0 +1,1 @@
+//! instrument (being built).

@@ -1,0 +1,1 @@
+//! rheology (being built).

@@ -1,0 +1,1 @@
+//! site (being built).

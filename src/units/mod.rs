@@ -1,0 +1,1 @@
+//! units (being built).
