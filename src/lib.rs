@@ -22,3 +22,5 @@ pub mod cli;
 pub mod tui;
 
 pub mod text;
+
+pub mod readings;

@@ -1,0 +1,1 @@
+//! The catalogue of readings an operator can record (being built).
