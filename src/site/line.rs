@@ -1,0 +1,74 @@
+//! `[[line]]` tables: bore, length, roughness, elevation, fittings and design pressure.
+
+use super::errors::{ErrorKind, Sink};
+use super::fields::{Need, Rule};
+use super::model::Line;
+use super::raw::RawTable;
+use crate::units::Dimension;
+
+pub(crate) const LINE_KEYS: &[&str] = &[
+    "id",
+    "description",
+    "inner_diameter",
+    "length",
+    "roughness",
+    "elevation_change",
+    "fittings_length",
+    "design_pressure",
+];
+
+/// Largest relative roughness ε/D accepted; the friction-factor charts stop at 0.05.
+const MAX_RELATIVE_ROUGHNESS: f64 = 0.05;
+
+/// A bad optional value is reported and left at its default: any report fails the load.
+pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Line> {
+    let id = t.id(sink, "id", Need::Required);
+    if let Some(id) = &id {
+        t.name_it(id);
+    }
+    let description = t
+        .text(sink, "description", Need::Optional)
+        .unwrap_or_default();
+    let len =
+        |key, rule, need, sink: &mut Sink| t.quantity(sink, key, Dimension::Length, rule, need);
+    let diameter = len("inner_diameter", Rule::Positive, Need::Required, sink);
+    let length = len("length", Rule::Positive, Need::Required, sink);
+    let roughness = len("roughness", Rule::NonNegative, Need::Required, sink);
+    let elevation = len("elevation_change", Rule::Any, Need::Optional, sink);
+    let fittings = len("fittings_length", Rule::NonNegative, Need::Optional, sink);
+    let design = t.quantity(
+        sink,
+        "design_pressure",
+        Dimension::Pressure,
+        Rule::Positive,
+        Need::Required,
+    );
+    let roughness = roughness.filter(|r| {
+        let ok = diameter.is_none_or(|d| *r <= MAX_RELATIVE_ROUGHNESS * d);
+        if !ok {
+            let msg = "must be under 5 % of the inner diameter; pipe roughness is small, e.g. \
+                       '0.045 mm' for commercial steel";
+            t.fail(sink, "roughness", ErrorKind::BadValue, msg.into());
+        }
+        ok
+    });
+    let elevation = elevation.filter(|z| {
+        let ok = length.is_none_or(|l| z.abs() <= l);
+        if !ok {
+            let msg = "a rise or fall larger than the line's length is impossible; \
+                       give outlet height minus inlet height";
+            t.fail(sink, "elevation_change", ErrorKind::BadValue, msg.into());
+        }
+        ok
+    });
+    Some(Line {
+        id: id?,
+        description,
+        inner_diameter_m: diameter?,
+        length_m: length?,
+        roughness_m: roughness?,
+        elevation_change_m: elevation.unwrap_or(0.0),
+        fittings_length_m: fittings.unwrap_or(0.0),
+        design_pressure_pa: design?,
+    })
+}
