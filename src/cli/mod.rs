@@ -4,6 +4,8 @@
 mod args;
 mod check_site;
 mod fit;
+mod fit_csv;
+mod fit_output;
 mod record;
 mod report;
 mod trend;

@@ -1,1 +1,12 @@
-//! session (being built).
+//! The hub between the engine and the faces: site + readings in, results out.
+//!
+//! Both the CLI and the TUI call only this layer for answers, so a number printed by
+//! `rheoside fit` and a number drawn on screen come from the same code path. Later
+//! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
+
+pub mod flow_curve;
+pub mod temperature;
+
+pub use flow_curve::{
+    FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, PointOut, analyse,
+};

@@ -1,0 +1,308 @@
+//! Printing a fitted flow curve: the human table (site units) and the `--json` contract (SI).
+
+use crate::rheology::{Estimate, Fit, ParamName, Weighting};
+use crate::session::temperature::TemperatureSeries;
+use crate::session::{FlowCurve, FlowCurveOptions};
+use crate::units::{self, Dimension, UnitSystem};
+use serde_json::{Map, Value, json};
+use std::fmt::Write as _;
+
+/// The one temperature the readings were taken at, if the CSV says and all rows agree (±0.05 K).
+pub fn single_temperature(temps_k: Option<&[f64]>) -> Option<f64> {
+    let temps = temps_k?;
+    let first = *temps.first()?;
+    temps
+        .iter()
+        .all(|t| (t - first).abs() <= 0.05)
+        .then_some(first)
+}
+
+/// The `--json` object. Key names are a contract with outside scripts: add keys, never rename.
+pub fn json(curve: &FlowCurve, opts: &FlowCurveOptions, temperature_k: Option<f64>) -> Value {
+    let fit = &curve.fit;
+    let mut params = Map::new();
+    let mut ci95 = Map::new();
+    for e in &fit.estimates {
+        params.insert(e.name.json_key().into(), finite(e.value));
+        ci95.insert(
+            e.name.json_key().into(),
+            e.ci95
+                .map_or(Value::Null, |(lo, hi)| json!([finite(lo), finite(hi)])),
+        );
+    }
+    json!({
+        "model": fit.model.kind().name(),
+        "params": params,
+        "ci95": ci95,
+        "r_squared": finite(fit.r_squared),
+        "rmse_pa": finite(fit.rmse_pa),
+        "aicc": fit.aicc.map_or(Value::Null, finite),
+        "reason": curve.reason,
+        "dof": fit.dof,
+        "weighting": match opts.weighting { Weighting::Unweighted => "none", Weighting::Relative => "relative" },
+        "rate_correction": opts.rate_correction,
+        "temperature_k": temperature_k.map_or(Value::Null, finite),
+        "candidates": candidates_json(curve),
+        "points": points_json(curve),
+        "warnings": curve.warnings,
+    })
+}
+
+/// NaN or infinity never reaches the output: JSON has no such numbers.
+fn finite(x: f64) -> Value {
+    if x.is_finite() { json!(x) } else { Value::Null }
+}
+
+fn candidates_json(curve: &FlowCurve) -> Value {
+    let Some(choice) = &curve.choice else {
+        return json!([]);
+    };
+    Value::Array(
+        choice
+            .candidates
+            .iter()
+            .map(|c| match &c.outcome {
+                Ok(fit) => json!({
+                    "model": c.kind.name(),
+                    "aicc": fit.aicc.map_or(Value::Null, finite),
+                    "r_squared": finite(fit.r_squared),
+                }),
+                Err(e) => json!({
+                    "model": c.kind.name(),
+                    "aicc": Value::Null,
+                    "r_squared": Value::Null,
+                    "error": e.to_string(),
+                }),
+            })
+            .collect(),
+    )
+}
+
+fn points_json(curve: &FlowCurve) -> Value {
+    Value::Array(
+        curve
+            .points
+            .iter()
+            .map(|p| {
+                json!({
+                    "rpm": p.rpm.map_or(Value::Null, finite),
+                    "dial": p.dial.map_or(Value::Null, finite),
+                    "newtonian_shear_rate_per_s": finite(p.newtonian_shear_rate_per_s),
+                    "shear_rate_per_s": finite(p.shear_rate_per_s),
+                    "shear_stress_pa": finite(p.shear_stress_pa),
+                    "flags": p.flags,
+                })
+            })
+            .collect(),
+    )
+}
+
+/// The human-readable result, in the site's unit system.
+pub fn table(curve: &FlowCurve, system: UnitSystem, temperature_k: Option<f64>) -> String {
+    let fit = &curve.fit;
+    let mut out = String::new();
+    let _ = writeln!(out, "Flow curve: {}", fit.model.kind().title());
+    if let Some(t) = temperature_k {
+        let _ = writeln!(
+            out,
+            "  at {}",
+            units::format(t, Dimension::Temperature, system)
+        );
+    }
+    let _ = writeln!(out, "  why: {}", curve.reason);
+    out.push('\n');
+    let _ = writeln!(
+        out,
+        "  {:<24} {:>14}   95 % confidence interval",
+        "parameter", "value"
+    );
+    for e in &fit.estimates {
+        let _ = writeln!(out, "{}", estimate_row(e, system));
+    }
+    out.push('\n');
+    let _ = writeln!(out, "{}", quality_line(fit, system));
+    out.push_str(&candidates_table(curve));
+    out.push_str(&points_table(curve, system));
+    for w in &curve.warnings {
+        let _ = writeln!(out, "  ! {w}");
+    }
+    out.push_str(
+        "\nAdvice only: confirm against the plant's own procedures before acting on it.\n",
+    );
+    out
+}
+
+fn estimate_row(e: &Estimate, system: UnitSystem) -> String {
+    let label = format!("{} {}", e.name.symbol(), e.name.label());
+    let value = param_text(e.name, e.value, system);
+    let ci = match e.ci95 {
+        Some((lo, hi)) => format!(
+            "{} to {}",
+            param_text(e.name, lo, system),
+            param_text(e.name, hi, system)
+        ),
+        None => "not available (too few points)".to_string(),
+    };
+    let bound = if e.at_bound {
+        "  (held at its bound)"
+    } else {
+        ""
+    };
+    format!("  {label:<24} {value:>14}   {ci}{bound}")
+}
+
+/// A parameter in display units: stresses and viscosities follow the site's system.
+pub fn param_text(name: ParamName, value: f64, system: UnitSystem) -> String {
+    match name {
+        ParamName::Tau0 => units::format(value, Dimension::Stress, system),
+        ParamName::Mu | ParamName::MuP | ParamName::MuC => {
+            units::format(value, Dimension::DynamicViscosity, system)
+        }
+        ParamName::N => format!("{value:.4}"),
+        ParamName::K => consistency_text(value, system),
+    }
+}
+
+/// K carries stress·sⁿ, so it converts with the stress unit.
+fn consistency_text(k_pa_sn: f64, system: UnitSystem) -> String {
+    let stress_unit = units::display_unit(Dimension::Stress, system);
+    let scaled = units::from_si(k_pa_sn, stress_unit, Dimension::Stress).unwrap_or(k_pa_sn);
+    format!("{} {stress_unit}·sⁿ", units::significant(scaled))
+}
+
+fn quality_line(fit: &Fit, system: UnitSystem) -> String {
+    let aicc = fit
+        .aicc
+        .map_or("not available".to_string(), |a| format!("{a:.2}"));
+    format!(
+        "  fit quality: R² {:.5}   RMSE {}   AICc {aicc}   degrees of freedom {}",
+        fit.r_squared,
+        units::format(fit.rmse_pa, Dimension::Stress, system),
+        fit.dof
+    )
+}
+
+fn candidates_table(curve: &FlowCurve) -> String {
+    let Some(choice) = &curve.choice else {
+        return String::new();
+    };
+    let mut out = String::from("\n  models compared (lower AICc is better):\n");
+    for c in &choice.candidates {
+        let line = match &c.outcome {
+            Ok(fit) => format!(
+                "    {:<18} AICc {:>9}   R² {:.5}",
+                c.kind.title(),
+                fit.aicc.map_or("—".to_string(), |a| format!("{a:.2}")),
+                fit.r_squared
+            ),
+            Err(e) => format!("    {:<18} not fitted: {e}", c.kind.title()),
+        };
+        let _ = writeln!(out, "{line}");
+    }
+    out
+}
+
+fn points_table(curve: &FlowCurve, system: UnitSystem) -> String {
+    let mut out = String::from("\n  readings:\n");
+    let _ = writeln!(
+        out,
+        "    {:>3} {:>7} {:>7} {:>15} {:>15} {:>11}  flags",
+        "#", "rpm", "dial", "Newtonian rate", "rate used", "stress"
+    );
+    for (i, p) in curve.points.iter().enumerate() {
+        let opt = |v: Option<f64>| v.map_or("—".to_string(), units::significant);
+        let row = format!(
+            "    {:>3} {:>7} {:>7} {:>11} 1/s {:>11} 1/s {:>11}  {}",
+            i + 1,
+            opt(p.rpm),
+            opt(p.dial),
+            units::significant(p.newtonian_shear_rate_per_s),
+            units::significant(p.shear_rate_per_s),
+            units::format(p.shear_stress_pa, Dimension::Stress, system),
+            p.flags.join(", ")
+        );
+        let _ = writeln!(out, "{}", row.trim_end());
+    }
+    out
+}
+
+/// Extra keys for readings at several temperatures (added beside the contract keys).
+pub fn add_series_json(value: &mut Value, series: &TemperatureSeries) {
+    let curves: Vec<Value> = series
+        .curves
+        .iter()
+        .map(|c| {
+            let params: Map<String, Value> = c
+                .curve
+                .fit
+                .estimates
+                .iter()
+                .map(|e| (e.name.json_key().to_string(), finite(e.value)))
+                .collect();
+            json!({
+                "temperature_k": finite(c.temperature_k),
+                "model": c.curve.fit.model.kind().name(),
+                "params": params,
+                "r_squared": finite(c.curve.fit.r_squared),
+            })
+        })
+        .collect();
+    let activation = match &series.activation {
+        Ok(a) => json!({
+            "parameter": series.parameter.json_key(),
+            "ea_j_per_mol": finite(a.ea_j_per_mol),
+            "ci95": a.ci95.map_or(Value::Null, |(lo, hi)| json!([finite(lo), finite(hi)])),
+            "reference_temperature_k": finite(series.reference_k),
+            "value_at_reference": finite(a.value_at_ref),
+        }),
+        Err(e) => json!({ "error": e.to_string() }),
+    };
+    if let Value::Object(map) = value {
+        map.insert("temperatures".into(), Value::Array(curves));
+        map.insert("activation_energy".into(), activation);
+    }
+}
+
+/// The per-temperature summary and the activation energy, for the human table.
+pub fn series_table(series: &TemperatureSeries, system: UnitSystem) -> String {
+    let mut out = format!(
+        "\nAt each temperature ({} throughout, so the constants compare):\n",
+        series.model.title()
+    );
+    for c in &series.curves {
+        let params: Vec<String> = c
+            .curve
+            .fit
+            .estimates
+            .iter()
+            .map(|e| {
+                format!(
+                    "{} {}",
+                    e.name.symbol(),
+                    param_text(e.name, e.value, system)
+                )
+            })
+            .collect();
+        let _ = writeln!(
+            out,
+            "  {:>9}   {}   R² {:.4}",
+            units::format(c.temperature_k, Dimension::Temperature, system),
+            params.join("   "),
+            c.curve.fit.r_squared
+        );
+    }
+    let _ = match &series.activation {
+        Ok(a) => writeln!(
+            out,
+            "  activation energy of {}: {:.1} kJ/mol{}",
+            series.parameter.symbol(),
+            a.ea_j_per_mol / 1000.0,
+            a.ci95.map_or(
+                " (two temperatures: no interval)".to_string(),
+                |(lo, hi)| { format!(", 95 % CI {:.1} to {:.1} kJ/mol", lo / 1000.0, hi / 1000.0) }
+            )
+        ),
+        Err(e) => writeln!(out, "  activation energy not fitted: {e}"),
+    };
+    out
+}
