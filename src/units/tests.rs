@@ -185,7 +185,7 @@ fn dimension_facts_other_modules_rely_on() {
         (Dimension::Pressure, "bar", "psi"),
         (Dimension::Flow, "m3/h", "gpm"),
         (Dimension::Length, "mm", "in"),
-        (Dimension::Temperature, "C", "F"),
+        (Dimension::Temperature, "°C", "°F"),
         (Dimension::DynamicViscosity, "mPa.s", "cP"),
         (Dimension::Density, "kg/m3", "lb/ft3"),
         (Dimension::Stress, "Pa", "lbf/100ft2"),
@@ -222,12 +222,12 @@ fn display_in_each_system() {
             UnitSystem::UsCustomary,
             "89.9 psi",
         ), // 6.2e5/6894.757 = 89.92
-        (293.15, Dimension::Temperature, UnitSystem::Si, "20.0 C"),
+        (293.15, Dimension::Temperature, UnitSystem::Si, "20.0 °C"),
         (
             293.15,
             Dimension::Temperature,
             UnitSystem::UsCustomary,
-            "68.0 F",
+            "68.0 °F",
         ), // 20 × 1.8 + 32
         (
             100.0 / 3600.0,
