@@ -87,6 +87,19 @@ impl<'a> RawTable<'a, '_> {
         }
     }
 
+    /// The opening of every equipment table: its required `id` (which then names the table
+    /// in later messages) and an optional free-text `description`.
+    pub(crate) fn identity(&mut self, sink: &mut Sink) -> (Option<String>, String) {
+        let id = self.id(sink, "id", Need::Required);
+        if let Some(id) = &id {
+            self.name_it(id);
+        }
+        let description = self
+            .text(sink, "description", Need::Optional)
+            .unwrap_or_default();
+        (id, description)
+    }
+
     /// A quantity written as a string with its unit, checked against `rule`, in SI.
     pub(crate) fn quantity(
         &self,

@@ -22,13 +22,7 @@ const MAX_RELATIVE_ROUGHNESS: f64 = 0.05;
 
 /// A bad optional value is reported and left at its default: any report fails the load.
 pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Line> {
-    let id = t.id(sink, "id", Need::Required);
-    if let Some(id) = &id {
-        t.name_it(id);
-    }
-    let description = t
-        .text(sink, "description", Need::Optional)
-        .unwrap_or_default();
+    let (id, description) = t.identity(sink);
     let len =
         |key, rule, need, sink: &mut Sink| t.quantity(sink, key, Dimension::Length, rule, need);
     let diameter = len("inner_diameter", Rule::Positive, Need::Required, sink);

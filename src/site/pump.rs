@@ -35,13 +35,7 @@ const KINDS: [(&str, Kind); 2] = [
 ];
 
 pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Pump> {
-    let id = t.id(sink, "id", Need::Required);
-    if let Some(id) = &id {
-        t.name_it(id);
-    }
-    let description = t
-        .text(sink, "description", Need::Optional)
-        .unwrap_or_default();
+    let (id, description) = t.identity(sink);
     let kind = t.choice(sink, "kind", &KINDS, Need::Required);
     let feeds = t.id(sink, "feeds", Need::Required);
     let speed = t.quantity(

@@ -25,13 +25,7 @@ pub(crate) const TANK_KEYS: &[&str] = &[
 ];
 
 pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Tank> {
-    let id = t.id(sink, "id", Need::Required);
-    if let Some(id) = &id {
-        t.name_it(id);
-    }
-    let description = t
-        .text(sink, "description", Need::Optional)
-        .unwrap_or_default();
+    let (id, description) = t.identity(sink);
     let product = t.id(sink, "product", Need::Required);
     let (diameter, impeller_diameter) = diameters(&t, sink);
     let len = Dimension::Length;

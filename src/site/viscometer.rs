@@ -57,13 +57,7 @@ const SPRING_KEYS: [&str; 4] = [
 ];
 
 pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Viscometer> {
-    let id = t.id(sink, "id", Need::Required);
-    if let Some(id) = &id {
-        t.name_it(id);
-    }
-    let description = t
-        .text(sink, "description", Need::Optional)
-        .unwrap_or_default();
+    let (id, description) = t.identity(sink);
     let kind = t.choice(sink, "geometry", &KINDS, Need::Required);
     let geometry = match kind? {
         Kind::Standard => standard(&t, sink),
