@@ -1,0 +1,188 @@
+//! Terminal UI costs: the first frame (app built on the demo site, drawn once at 80×24),
+//! one typed digit (time, and bytes on the wire through the real crossterm backend), a
+//! full redraw at 200×60, and process start to first frame in a pseudo-terminal.
+//! Run with `cargo bench --bench tui`. Readings are invented (an HB-like sauce).
+
+use chrono::DateTime;
+use divan::{Bencher, black_box};
+use portable_pty::{CommandBuilder, PtySize, native_pty_system};
+use ratatui::backend::{CrosstermBackend, TestBackend};
+use ratatui::crossterm::event::{KeyCode, KeyEvent};
+use ratatui::layout::Rect;
+use ratatui::{Terminal, TerminalOptions, Viewport};
+use rheoside::tui::app::App;
+use rheoside::tui::theme::{ColourMode, Glyphs, Theme};
+use rheoside::tui::{render, startup};
+use std::io::{self, Read, Write};
+use std::num::NonZeroU16;
+use std::sync::atomic::{AtomicUsize, Ordering};
+use std::sync::{Arc, Mutex};
+use std::time::{Duration, Instant};
+
+fn main() {
+    eprintln!(
+        "bytes for one digit typed into a dial field: {}",
+        digit_bytes()
+    );
+    divan::main();
+}
+
+fn app() -> App {
+    let site = rheoside::site::demo().expect("the demo site loads");
+    let theme = Theme::new(ColourMode::Colour, Glyphs::Unicode);
+    let now = DateTime::parse_from_rfc3339("2026-12-01T08:00:00+01:00").expect("a valid time");
+    startup::app_for(site, "bench", theme, now, "logs/bench.jsonl")
+}
+
+fn keys(app: &mut App, text: &str) {
+    for c in text.chars() {
+        let code = match c {
+            '\r' => KeyCode::Enter,
+            '\t' => KeyCode::Tab,
+            c => KeyCode::Char(c),
+        };
+        app.on_key(&KeyEvent::from(code));
+    }
+}
+
+/// The readings form with the picks made and the first dial being typed into.
+fn typing_app() -> App {
+    let mut a = app();
+    keys(&mut a, "\r\r\t5");
+    a
+}
+
+/// A saved set on the Flow curve view: the busiest screen.
+fn curve_app() -> App {
+    let mut a = app();
+    keys(&mut a, "\r\r\t110\r76\r61.5\r44\r16\r14\rs");
+    a
+}
+
+#[divan::bench]
+fn first_frame_80x24() -> Terminal<TestBackend> {
+    let a = app();
+    let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");
+    t.draw(|f| render::draw(&a, f)).expect("drawing");
+    t
+}
+
+#[divan::bench]
+fn full_redraw_200x60(bencher: Bencher) {
+    let a = curve_app();
+    let mut t = Terminal::new(TestBackend::new(200, 60)).expect("a test terminal");
+    bencher.bench_local(|| {
+        // Clearing forgets the last frame, so every cell is drawn and sent again.
+        t.clear().expect("clearing");
+        t.draw(|f| render::draw(black_box(&a), f)).expect("drawing");
+    });
+}
+
+#[divan::bench]
+fn typed_digit_80x24(bencher: Bencher) {
+    let mut a = typing_app();
+    let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");
+    t.draw(|f| render::draw(&a, f)).expect("drawing");
+    bencher.bench_local(|| {
+        keys(&mut a, "2");
+        t.draw(|f| render::draw(&a, f)).expect("drawing");
+        a.on_key(&KeyEvent::from(KeyCode::Backspace));
+        t.draw(|f| render::draw(&a, f)).expect("drawing");
+    });
+}
+
+#[derive(Clone, Default)]
+struct Counter(Arc<AtomicUsize>);
+
+impl Write for Counter {
+    fn write(&mut self, buf: &[u8]) -> io::Result<usize> {
+        self.0.fetch_add(buf.len(), Ordering::Relaxed);
+        Ok(buf.len())
+    }
+    fn flush(&mut self) -> io::Result<()> {
+        Ok(())
+    }
+}
+
+/// Bytes the crossterm backend writes for the frame after one more digit.
+fn digit_bytes() -> usize {
+    let mut a = typing_app();
+    let counter = Counter::default();
+    let options = TerminalOptions {
+        viewport: Viewport::Fixed(Rect::new(0, 0, 80, 24)),
+    };
+    let backend = CrosstermBackend::new(counter.clone());
+    let Ok(mut t) = Terminal::with_options(backend, options) else {
+        return 0;
+    };
+    let _ = t.draw(|f| render::draw(&a, f));
+    counter.0.store(0, Ordering::Relaxed);
+    keys(&mut a, "2");
+    let _ = t.draw(|f| render::draw(&a, f));
+    counter.0.load(Ordering::Relaxed)
+}
+
+/// A started program; stopping it (SIGHUP, up to 250 ms until portable-pty's SIGKILL) and
+/// removing its journal happen on drop, which divan does after the timed part.
+struct Started {
+    child: Box<dyn portable_pty::Child + Send + Sync>,
+    _logs: tempfile::TempDir,
+}
+
+impl Drop for Started {
+    fn drop(&mut self) {
+        let _ = self.child.kill();
+        let _ = self.child.wait();
+    }
+}
+
+/// The release binary in a pty at 80×24 until its first frame is on the parsed screen:
+/// process creation, site load, journal create (two fsyncs), terminal set-up, first draw.
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn process_start_to_first_frame(bencher: Bencher) {
+    bencher.bench_local(|| {
+        let logs = tempfile::tempdir().expect("a temp dir");
+        let pty = native_pty_system()
+            .openpty(PtySize {
+                rows: 24,
+                cols: 80,
+                pixel_width: 0,
+                pixel_height: 0,
+            })
+            .expect("a pty");
+        let mut cmd = CommandBuilder::new(env!("CARGO_BIN_EXE_rheoside"));
+        cmd.args(["--log-dir", logs.path().to_str().expect("a UTF-8 path")]);
+        cmd.env("TERM", "xterm-256color");
+        let child = pty.slave.spawn_command(cmd).expect("the binary starts");
+        drop(pty.slave);
+        let mut reader = pty.master.try_clone_reader().expect("a pty reader");
+        let (rows, cols) = (
+            NonZeroU16::new(24).expect("24"),
+            NonZeroU16::new(80).expect("80"),
+        );
+        let screen = Arc::new(Mutex::new(vt100::Parser::new(rows, cols, 0)));
+        let sink = Arc::clone(&screen);
+        std::thread::spawn(move || {
+            let mut buf = [0u8; 4096];
+            while let Ok(n) = reader.read(&mut buf) {
+                if n == 0 {
+                    break;
+                }
+                sink.lock().expect("screen lock").process(&buf[..n]);
+            }
+            drop(pty.master);
+        });
+        let start = Instant::now();
+        while !screen
+            .lock()
+            .expect("screen lock")
+            .screen()
+            .contents()
+            .contains("Sample point")
+        {
+            assert!(start.elapsed() < Duration::from_secs(20), "no first frame");
+            std::thread::sleep(Duration::from_micros(200));
+        }
+        Started { child, _logs: logs }
+    });
+}

@@ -1,0 +1,328 @@
+//! The app's state and its one update path: a key becomes an action (through the key map),
+//! the overlay or the active view handles it, and the effects it returns are applied here.
+//! Records for the journal wait in an outbox that the loop hands to the writer thread.
+
+use super::ctx::Ctx;
+use super::keymap::{self, Action, Context, Key};
+use super::overlay::Overlay;
+use super::strings::{confirm as cs, note as ns, status as ss};
+use super::views::{self, Draft, Effect, SavedSet, SessionEvent, View, ViewId};
+use super::widgets::editing::{self, EditStep, Leave};
+use super::writer::{Reply, Ticket};
+use crate::journal::{Payload, Record};
+use chrono::{DateTime, FixedOffset};
+use ratatui::crossterm::event::KeyEvent;
+use std::sync::Arc;
+
+/// A record for the writer thread.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Outgoing {
+    pub ticket: Ticket,
+    pub equipment: Option<String>,
+    pub payload: Payload,
+}
+
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum RunState {
+    Running,
+    Quit,
+}
+
+pub struct App {
+    pub ctx: Ctx,
+    views: Vec<Box<dyn View>>,
+    active: usize,
+    overlay: Overlay,
+    status: String,
+    outbox: Vec<Outgoing>,
+    state: RunState,
+}
+
+impl App {
+    pub fn new(ctx: Ctx, status: &str) -> App {
+        let views = views::all(&ctx);
+        App {
+            ctx,
+            views,
+            active: 0,
+            overlay: Overlay::None,
+            status: status.to_string(),
+            outbox: Vec::new(),
+            state: RunState::Running,
+        }
+    }
+
+    /// Pick up where a resumed journal left off: its records fill the Journal view, its
+    /// last set is shown again on the Flow curve view, and that set's product and sample
+    /// point become the picks.
+    pub fn resume_from(&mut self, records: &[Record]) {
+        self.ctx.log = super::session_log::SessionLog::from_records(records);
+        self.status = format!(
+            "{} {} {}; {}.",
+            ss::RESUMED,
+            records.len(),
+            ss::RECORDS,
+            ss::RESUMED_TAIL
+        );
+        let last = records
+            .iter()
+            .rev()
+            .find(|r| matches!(r.payload, Payload::ViscometerSet { .. }));
+        let Some(record) = last else { return };
+        let Payload::ViscometerSet {
+            viscometer,
+            product,
+            temperature_raw,
+            rows,
+            ..
+        } = &record.payload
+        else {
+            return;
+        };
+        let Some(v) = self.ctx.site.viscometer(viscometer) else {
+            return;
+        };
+        let readings = rows
+            .iter()
+            .map(|r| crate::instrument::DialReading::new(r.rpm, r.dial));
+        let set = Arc::new(SavedSet {
+            viscometer: viscometer.clone(),
+            geometry: v.geometry.clone(),
+            product: product.clone(),
+            temperature_text: temperature_raw.clone(),
+            readings: readings.collect(),
+        });
+        self.ctx.picks.product = Some(product.clone());
+        self.ctx.picks.equipment = record.equipment.clone();
+        self.broadcast(&SessionEvent::SetSaved { set, ticket: None });
+        self.apply(vec![Effect::Show(ViewId::Curve)]);
+    }
+
+    pub fn state(&self) -> RunState {
+        self.state
+    }
+
+    pub fn status(&self) -> &str {
+        &self.status
+    }
+
+    pub fn set_status(&mut self, text: String) {
+        self.status = text;
+    }
+
+    pub fn overlay(&self) -> &Overlay {
+        &self.overlay
+    }
+
+    pub fn views(&self) -> &[Box<dyn View>] {
+        &self.views
+    }
+
+    pub fn active_view(&self) -> &dyn View {
+        self.views[self.active].as_ref()
+    }
+
+    pub fn active_id(&self) -> ViewId {
+        self.active_view().id()
+    }
+
+    /// What the screen is doing, for the key map.
+    pub fn context(&self) -> Context {
+        match &self.overlay {
+            Overlay::Help { .. } => Context::Help,
+            Overlay::ConfirmQuit { .. } => Context::ConfirmQuit,
+            Overlay::Note(_) => Context::Note,
+            Overlay::None if self.active_view().editing() => Context::Editing,
+            Overlay::None => Context::Top(self.active_id()),
+        }
+    }
+
+    /// Records waiting to go to the writer thread.
+    pub fn take_outbox(&mut self) -> Vec<Outgoing> {
+        std::mem::take(&mut self.outbox)
+    }
+
+    pub fn on_reply(&mut self, reply: &Reply) {
+        self.ctx.log.apply(reply);
+    }
+
+    pub fn tick(&mut self, now: DateTime<FixedOffset>) {
+        self.ctx.clock.now = now;
+    }
+
+    /// Why quitting now would lose something, one line per reason.
+    pub fn unsaved_reasons(&self) -> Vec<String> {
+        let mut out: Vec<String> = self
+            .views
+            .iter()
+            .filter_map(|v| v.unsaved_input())
+            .map(|what| format!("{what} {}.", cs::FORM_INPUT))
+            .collect();
+        let note = match &self.overlay {
+            Overlay::Note(f) | Overlay::ConfirmQuit { note: Some(f) } => !f.is_empty(),
+            _ => false,
+        };
+        if note {
+            out.push(format!("{} {}.", ns::SUMMARY, cs::FORM_INPUT));
+        }
+        let n = self.ctx.log.unsaved();
+        if n > 0 {
+            out.push(format!("{n} {}.", cs::RECORDS_UNSAVED));
+        }
+        out
+    }
+
+    /// Quit, or ask first when something would be lost.
+    pub fn request_quit(&mut self) {
+        if self.unsaved_reasons().is_empty() {
+            self.state = RunState::Quit;
+        } else {
+            let note = match std::mem::replace(&mut self.overlay, Overlay::None) {
+                Overlay::Note(f) | Overlay::ConfirmQuit { note: Some(f) } => Some(f),
+                _ => None,
+            };
+            self.overlay = Overlay::ConfirmQuit { note };
+        }
+    }
+
+    /// Quit without asking (a signal): the loop still flushes the journal.
+    pub fn force_quit(&mut self) {
+        self.state = RunState::Quit;
+    }
+
+    /// One key event: releases and repeats are dropped here, before the key map.
+    pub fn on_key(&mut self, ev: &KeyEvent) {
+        let Some(key) = Key::from_event(ev) else {
+            return;
+        };
+        let context = self.context();
+        let Some(action) = keymap::lookup(context, key) else {
+            return;
+        };
+        if action == Action::Interrupt {
+            return self.request_quit();
+        }
+        match context {
+            Context::Help => self.help_key(action),
+            Context::ConfirmQuit => self.confirm_key(action),
+            Context::Note => self.note_key(action),
+            Context::Editing => self.view_key(action),
+            Context::Top(_) => self.top_key(action),
+        }
+    }
+
+    fn top_key(&mut self, action: Action) {
+        let n = self.views.len();
+        match action {
+            Action::Quit => self.request_quit(),
+            Action::Help => self.overlay = Overlay::Help { scroll: 0 },
+            Action::NextView => self.active = (self.active + 1) % n,
+            Action::PrevView => self.active = (self.active + n - 1) % n,
+            Action::AddNote => self.overlay = Overlay::new_note(),
+            _ => self.view_key(action),
+        }
+    }
+
+    fn view_key(&mut self, action: Action) {
+        let effects = self.views[self.active].handle(action, &self.ctx);
+        self.apply(effects);
+    }
+
+    fn help_key(&mut self, action: Action) {
+        if let Overlay::Help { scroll } = &mut self.overlay {
+            match action {
+                Action::Close => self.overlay = Overlay::None,
+                Action::Up => *scroll = scroll.saturating_sub(1),
+                Action::Down => *scroll = scroll.saturating_add(1),
+                Action::PageUp => *scroll = scroll.saturating_sub(10),
+                Action::PageDown => *scroll = scroll.saturating_add(10),
+                _ => {}
+            }
+        }
+    }
+
+    fn confirm_key(&mut self, action: Action) {
+        match action {
+            Action::Yes => self.state = RunState::Quit,
+            Action::No => {
+                self.overlay = match std::mem::replace(&mut self.overlay, Overlay::None) {
+                    Overlay::ConfirmQuit { note: Some(f) } => Overlay::Note(f),
+                    _ => Overlay::None,
+                };
+            }
+            _ => {}
+        }
+    }
+
+    fn note_key(&mut self, action: Action) {
+        let Overlay::Note(field) = &mut self.overlay else {
+            return;
+        };
+        match editing::apply(field, action) {
+            EditStep::Cancelled => self.overlay = Overlay::None,
+            // Enter saves; Tab and the arrows have nowhere to go in a one-field box.
+            EditStep::Accepted(Leave::Below) => {
+                let text = field.text().trim().to_string();
+                self.overlay = Overlay::None;
+                self.save_note(text);
+            }
+            EditStep::Accepted(_) | EditStep::Typing => {}
+        }
+    }
+
+    fn save_note(&mut self, text: String) {
+        if text.is_empty() {
+            self.status = ns::EMPTY.to_string();
+            return;
+        }
+        let equipment = self.ctx.picks.equipment.clone();
+        let payload = Payload::Note { text };
+        let summary = super::session_log::summarize(&payload, equipment.as_deref());
+        self.journal(Draft {
+            equipment,
+            payload,
+            summary,
+        });
+        self.status = ns::SAVED.to_string();
+    }
+
+    fn apply(&mut self, effects: Vec<Effect>) {
+        for effect in effects {
+            match effect {
+                Effect::Status(s) => self.status = s,
+                Effect::PickEquipment(id) => self.ctx.picks.equipment = Some(id),
+                Effect::PickProduct(p) => self.ctx.picks.product = Some(p),
+                Effect::Journal(d) => {
+                    self.journal(d);
+                }
+                Effect::SaveSet { drafts, set } => {
+                    let tickets: Vec<Ticket> =
+                        drafts.into_iter().map(|d| self.journal(d)).collect();
+                    let ticket = tickets.first().copied();
+                    self.broadcast(&SessionEvent::SetSaved { set, ticket });
+                }
+                Effect::Show(id) => {
+                    if let Some(i) = self.views.iter().position(|v| v.id() == id) {
+                        self.active = i;
+                    }
+                }
+            }
+        }
+    }
+
+    fn journal(&mut self, draft: Draft) -> Ticket {
+        let ticket = self.ctx.log.push(self.ctx.clock.now, draft.summary);
+        self.outbox.push(Outgoing {
+            ticket,
+            equipment: draft.equipment,
+            payload: draft.payload,
+        });
+        ticket
+    }
+
+    fn broadcast(&mut self, event: &SessionEvent) {
+        for view in &mut self.views {
+            view.on_event(event, &self.ctx);
+        }
+    }
+}

@@ -1,0 +1,151 @@
+//! Drawing a whole frame from the app's state: top bar, view tabs, the active view, its
+//! caution, the status line, the footer from the key map, and any overlay. Below the
+//! minimum size a "too small" screen is drawn instead.
+
+use super::app::App;
+use super::ctx::Ctx;
+use super::keymap;
+use super::layout::{self, MIN_HEIGHT, MIN_WIDTH, Regions, clip_end};
+use super::overlay::{self, Overlay};
+use super::session_log::JournalState;
+use super::strings::{self, small, top};
+use super::theme::Theme;
+use super::views::ViewId;
+use crate::text::sanitize;
+use ratatui::Frame;
+use ratatui::layout::{HorizontalAlignment, Rect};
+use ratatui::text::{Line, Span};
+use ratatui::widgets::{Paragraph, Wrap};
+
+/// Draw the app. Pure: reads state, writes the frame's buffer, nothing else.
+pub fn draw(app: &App, frame: &mut Frame) {
+    let area = frame.area();
+    if area.is_empty() {
+        return;
+    }
+    let t = &app.ctx.theme;
+    if layout::fits(area) {
+        let r = Regions::split(area);
+        draw_top(frame, r.top, &app.ctx);
+        draw_tabs(frame, r.tabs, app);
+        app.active_view().render(frame, r.body, &app.ctx);
+        let caution = Paragraph::new(app.active_id().caution()).style(t.caution);
+        frame.render_widget(caution, r.caution);
+        draw_status(frame, r.status, app);
+        draw_footer(frame, r.footer, app);
+    } else {
+        draw_too_small(frame, area, t);
+    }
+    match app.overlay() {
+        Overlay::None => {}
+        Overlay::Help { scroll } => {
+            let ids: Vec<ViewId> = app.views().iter().map(|v| v.id()).collect();
+            overlay::draw_help(frame, *scroll, &ids, t);
+        }
+        Overlay::ConfirmQuit { .. } => overlay::draw_confirm(frame, &app.unsaved_reasons(), t),
+        Overlay::Note(field) => overlay::draw_note(frame, field, t),
+    }
+}
+
+fn draw_top(frame: &mut Frame, area: Rect, ctx: &Ctx) {
+    let t = &ctx.theme;
+    let journal = match ctx.log.state() {
+        JournalState::Saved if ctx.log.entries().is_empty() => {
+            Span::styled(top::JOURNAL_EMPTY, t.dim)
+        }
+        JournalState::Saved => Span::styled(top::JOURNAL_SAVED, t.ok),
+        JournalState::Unsaved(n) => Span::styled(format!("{n} {}", top::JOURNAL_UNSAVED), t.warn),
+        JournalState::Error { unsaved, .. } => Span::styled(
+            format!("{}: {unsaved} {}", top::JOURNAL_ERROR, top::JOURNAL_UNSAVED),
+            t.error,
+        ),
+    };
+    let right = Line::from(vec![
+        Span::raw(ctx.clock.now.format("%H:%M:%S").to_string()),
+        Span::styled(
+            format!(" {} {}  ", top::UP, ctx.clock.elapsed_text()),
+            t.dim,
+        ),
+        journal,
+        Span::raw(" "),
+    ]);
+    let right_w = right.width() as u16;
+    let app_name = format!(" {} ", strings::APP_NAME);
+    let operator = clip_end(&sanitize(&ctx.operator, false), 16);
+    let op_label = format!("  {} ", top::OPERATOR);
+    // The operator is never cut off; a long site name gives way first.
+    let fixed = right_w as usize + 3 + app_name.len() + op_label.len() + operator.chars().count();
+    let site_room = usize::from(area.width).saturating_sub(fixed);
+    let left = Line::from(vec![
+        Span::styled(app_name, t.tab_active),
+        Span::styled(
+            format!(" {}", clip_end(&sanitize(&ctx.site.name, false), site_room)),
+            t.title,
+        ),
+        Span::styled(op_label, t.dim),
+        Span::raw(operator),
+    ]);
+    let left_area = Rect {
+        width: area.width.saturating_sub(right_w + 1),
+        ..area
+    };
+    frame.render_widget(Paragraph::new(left), left_area);
+    frame.render_widget(
+        Paragraph::new(right).alignment(HorizontalAlignment::Right),
+        area,
+    );
+}
+
+fn draw_tabs(frame: &mut Frame, area: Rect, app: &App) {
+    let t = &app.ctx.theme;
+    let active = app.active_id();
+    let mut spans = vec![Span::raw(" ")];
+    for v in app.views() {
+        let style = if v.id() == active {
+            t.tab_active
+        } else {
+            t.tab
+        };
+        spans.push(Span::styled(format!(" {} ", v.id().title()), style));
+        spans.push(Span::raw(" "));
+    }
+    frame.render_widget(Paragraph::new(Line::from(spans)), area);
+}
+
+fn draw_status(frame: &mut Frame, area: Rect, app: &App) {
+    let t = &app.ctx.theme;
+    let (text, style) = match app.ctx.log.state() {
+        JournalState::Error { message, .. } => (message, t.error),
+        _ => (app.status().to_string(), t.base),
+    };
+    frame.render_widget(Paragraph::new(sanitize(&text, false)).style(style), area);
+}
+
+/// The footer: as many of the context's bindings as fit, in key-map order.
+fn draw_footer(frame: &mut Frame, area: Rect, app: &App) {
+    let t = &app.ctx.theme;
+    let mut spans = Vec::new();
+    let mut used = 0usize;
+    for (key, label) in keymap::footer(app.context()) {
+        let need = key.chars().count() + label.chars().count() + 3;
+        if used + need > usize::from(area.width) {
+            break;
+        }
+        used += need;
+        spans.push(Span::styled(format!(" {key}"), t.key));
+        spans.push(Span::styled(format!(" {label} "), t.dim));
+    }
+    frame.render_widget(Paragraph::new(Line::from(spans)), area);
+}
+
+fn draw_too_small(frame: &mut Frame, area: Rect, t: &Theme) {
+    let text = vec![
+        Line::styled(
+            format!("{} ({}x{}).", small::NEEDS, area.width, area.height),
+            t.warn,
+        ),
+        Line::raw(format!("{} {MIN_WIDTH}x{MIN_HEIGHT},", small::ENLARGE)),
+        Line::raw(small::OR_QUIT),
+    ];
+    frame.render_widget(Paragraph::new(text).wrap(Wrap { trim: true }), area);
+}

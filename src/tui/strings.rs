@@ -1,0 +1,265 @@
+//! Every word the terminal UI shows, in one place, so wording is reviewed (and could be
+//! translated) without reading drawing code. Names from the config and operator text are
+//! not here: they are cleaned before they are drawn.
+
+/// Printed instead of drawing when stdout is not a terminal.
+pub const NOT_A_TERMINAL: &str = "rheoside: stdout is not a terminal, so the screen UI is not started; use a subcommand instead (rheoside --help)";
+
+pub const APP_NAME: &str = "rheoside";
+pub const DEMO_SITE_SOURCE: &str = "bundled demo site (invented)";
+
+/// Top bar.
+pub mod top {
+    pub const OPERATOR: &str = "op";
+    /// Before the session's running time.
+    pub const UP: &str = "up";
+    pub const JOURNAL_SAVED: &str = "journal saved";
+    pub const JOURNAL_EMPTY: &str = "journal empty";
+    pub const JOURNAL_UNSAVED: &str = "unsaved";
+    pub const JOURNAL_ERROR: &str = "JOURNAL ERROR";
+    pub const JOURNAL_CLOSED: &str = "journal closed";
+}
+
+/// Names of the views, as the tab row shows them.
+pub mod views {
+    pub const SITE: &str = "Site";
+    pub const READINGS: &str = "Readings";
+    pub const CURVE: &str = "Flow curve";
+    pub const JOURNAL: &str = "Journal";
+}
+
+/// One line per view: what to watch out for before acting on what it shows.
+pub mod caution {
+    pub const SITE: &str =
+        "Sample only where it is safe to reach; the tool advises, it does not certify.";
+    pub const READINGS: &str =
+        "Stop the agitator before sampling; hot product: wear face and hand protection.";
+    pub const CURVE: &str =
+        "Check the fit against the points before acting on it; advice, not a certificate.";
+    pub const JOURNAL: &str =
+        "Only records marked saved are on disk; hand the journal file over at shift end.";
+}
+
+/// Labels of the key map (footer and help).
+pub mod keys {
+    pub const INTERRUPT: &str = "quit now (asks if input is unsaved)";
+    pub const HELP: &str = "help";
+    pub const QUIT: &str = "quit";
+    pub const NEXT_VIEW: &str = "next view";
+    pub const PREV_VIEW: &str = "previous view";
+    pub const ADD_NOTE: &str = "note";
+    pub const UP: &str = "move up";
+    pub const DOWN: &str = "move down";
+    pub const LEFT: &str = "move left / previous choice";
+    pub const RIGHT: &str = "move right / next choice";
+    pub const PAGE_UP: &str = "page up";
+    pub const PAGE_DOWN: &str = "page down";
+    pub const HOME: &str = "to the top";
+    pub const END: &str = "to the bottom";
+    pub const PICK: &str = "pick";
+    pub const EDIT_FIELD: &str = "edit";
+    pub const TYPE_VALUE: &str = "type a new value into the selected field";
+    pub const SAVE_SET: &str = "save set";
+    pub const ADD_ROW: &str = "add a reading row";
+    pub const REMOVE_ROW: &str = "remove the selected reading row";
+    pub const NEXT_MODEL: &str = "model";
+    pub const PREV_MODEL: &str = "previous model";
+    pub const AUTO_MODEL: &str = "let the tool choose the model";
+    pub const SET_RATE: &str = "new shear rate";
+    pub const TYPE_RATE: &str = "type a shear rate for the apparent viscosity";
+    pub const ACCEPT: &str = "accept";
+    pub const ACCEPT_NEXT: &str = "accept, next field";
+    pub const ACCEPT_PREV: &str = "accept, previous field";
+    pub const ACCEPT_UP: &str = "accept, field above";
+    pub const ACCEPT_DOWN: &str = "accept, field below";
+    pub const CANCEL_EDIT: &str = "undo changes";
+    pub const DELETE_BACK: &str = "delete before the cursor";
+    pub const DELETE_FORWARD: &str = "delete at the cursor";
+    pub const CURSOR_LEFT: &str = "cursor left";
+    pub const CURSOR_RIGHT: &str = "cursor right";
+    pub const CURSOR_HOME: &str = "cursor to start";
+    pub const CURSOR_END: &str = "cursor to end";
+    pub const CLEAR_FIELD: &str = "clear the field";
+    pub const CLOSE: &str = "close";
+    pub const SAVE_NOTE: &str = "save the note";
+    pub const CANCEL_NOTE: &str = "cancel";
+    pub const YES_QUIT: &str = "yes, quit";
+    pub const NO_STAY: &str = "no, stay";
+}
+
+/// The help overlay.
+pub mod help {
+    pub const TITLE: &str = " Keys ";
+    pub const EVERYWHERE: &str = "Everywhere";
+    pub const TOP_LEVEL: &str = "In every view";
+    pub const MOVING: &str = "Moving";
+    pub const EDITING: &str = "Typing in a field (or in the note box)";
+    pub const NOTE_BOX: &str = "In the note box";
+    pub const TYPING_TEXT: &str = "any other key types into the field";
+    pub const IN_HELP: &str = "In this help";
+    pub const CONFIRM: &str = "When asked before quitting";
+    pub const SCROLL_HINT: &str = "Up/Down to scroll";
+}
+
+/// Terminal-too-small screen.
+pub mod small {
+    pub const NEEDS: &str = "The terminal is too small";
+    pub const ENLARGE: &str = "Enlarge the window to at least";
+    pub const OR_QUIT: &str = "or press q (or Ctrl-C) to quit.";
+}
+
+/// Asking before quitting.
+pub mod confirm {
+    pub const TITLE: &str = " Quit? ";
+    pub const FORM_INPUT: &str = "has input that is not saved";
+    pub const RECORDS_UNSAVED: &str =
+        "journal record(s) not yet on disk; one more try is made on quitting";
+    pub const QUESTION: &str = "Quit anyway?";
+    pub const NOTHING_UNSAVED: &str = "Everything is saved now.";
+}
+
+/// The note box.
+pub mod note {
+    pub const TITLE: &str = " Note for the journal ";
+    pub const HINT: &str = "Enter saves the note, Esc cancels; Ctrl-C quits.";
+    pub const EMPTY: &str = "Empty note: nothing saved.";
+    pub const SAVED: &str = "Note sent to the journal.";
+    pub const SUMMARY: &str = "Note";
+}
+
+/// Site view.
+pub mod site {
+    pub const EQUIPMENT: &str = " Sample point (equipment) ";
+    pub const PRODUCTS: &str = " Product ";
+    pub const NONE: &str = "(none in the site config)";
+    pub const PICKED: &str = "Picked";
+    pub const HOLDS: &str = "it holds, so also picked:";
+    pub const NOW_PRODUCT: &str = "Now pick the product (Enter).";
+    pub const SITE: &str = "Site";
+    pub const NEXT_STEP: &str = "Tab goes on to Readings.";
+}
+
+/// Readings view.
+pub mod readings {
+    pub const TITLE: &str = " Viscometer set ";
+    pub const SAMPLE_POINT: &str = "Sample point";
+    pub const PRODUCT: &str = "Product";
+    pub const NOT_PICKED: &str = "not picked (Site view)";
+    pub const VISCOMETER: &str = "Viscometer";
+    pub const TEMPERATURE: &str = "Temperature";
+    /// After the unit a bare number is taken in.
+    pub const UNLESS_UNIT: &str = "unless a unit is typed";
+    pub const NOTES: &str = "Notes";
+    pub const SPEED: &str = "Speed";
+    pub const DIAL: &str = "Dial";
+    pub const STORES: &str = "stored as";
+    pub const NO_VISCOMETER: &str = "no viscometer in the site config";
+    pub const OK_HINT: &str = "Fields are checked as you type; s saves the set to the journal.";
+    pub const NEED_PRODUCT: &str =
+        "No product picked: pick one on the Site view (Shift-Tab) first.";
+    pub const NEED_VISCOMETER: &str =
+        "The site config lists no viscometer, so no set can be saved.";
+    pub const NEED_READING: &str = "No dial reading entered: type at least one dial value.";
+    pub const DIAL_NEEDS_SPEED: &str = "a dial reading needs a speed";
+    pub const NEGATIVE_DIAL: &str = "a dial reading cannot be negative; type 0 or more";
+    pub const ROW: &str = "row";
+    pub const SAVED: &str = "Set sent to the journal; its flow curve is on the Flow curve view.";
+    pub const SET_SUMMARY: &str = "Viscometer set";
+    pub const READINGS_WORD: &str = "readings";
+    pub const NO_TEMPERATURE: &str = "no temperature";
+    pub const MAX_ROWS: &str = "No more rows: ten readings is the most a set holds.";
+    pub const MIN_ROWS: &str = "A set keeps at least one row.";
+    pub const FORM_NAME: &str = "The readings form";
+}
+
+/// Flow curve view.
+pub mod curve {
+    pub const CHART_TITLE: &str = " Shear stress (Pa) vs shear rate (1/s) ";
+    pub const LEGEND_MEASURED: &str = "measured";
+    pub const LEGEND_FLAGGED: &str = "flagged";
+    pub const LEGEND_FIT: &str = "fit";
+    pub const MODEL_TITLE: &str = " Model ";
+    pub const NO_SET: &str = "No set yet: enter one on the Readings view and press s.";
+    pub const FIT_FAILED: &str = "No fit";
+    pub const AUTO: &str = "auto";
+    pub const BY_HAND: &str = "by hand";
+    pub const R2: &str = "R²";
+    pub const RMSE: &str = "RMSE";
+    pub const WHY: &str = "Why";
+    pub const NO_CI: &str = "no CI";
+    pub const APPARENT: &str = "Apparent viscosity at";
+    pub const POINTS_TITLE: &str = " Points ";
+    pub const COL_RPM: &str = "rpm";
+    pub const COL_DIAL: &str = "dial";
+    pub const COL_RATE: &str = "rate 1/s";
+    pub const COL_STRESS: &str = "stress Pa";
+    pub const COL_FLAGS: &str = "flags";
+    pub const WARNINGS: &str = " Warnings ";
+    pub const SET: &str = "Set";
+    pub const SENDING: &str = "sending";
+    pub const RATE_INVALID: &str = "shear rate";
+    pub const STRESS_UNIT: &str = "Pa";
+    pub const VISCOSITY_UNIT: &str = "Pa·s";
+    pub const RATE_UNIT: &str = "1/s";
+    pub const AT: &str = "at";
+}
+
+/// Journal view.
+pub mod journal {
+    pub const TITLE: &str = " Session journal ";
+    pub const FILE: &str = "file";
+    pub const EMPTY: &str = "Nothing recorded yet.";
+    pub const SAVED: &str = "saved";
+    pub const SENDING: &str = "sending";
+    pub const UNSAVED: &str = "UNSAVED";
+    pub const REFUSED: &str = "REFUSED";
+    pub const SESSION_START: &str = "Session started";
+    pub const SESSION_END: &str = "Session ended";
+    pub const READING: &str = "Reading";
+    pub const RESULT: &str = "Result";
+    pub const FINDING: &str = "Finding";
+    pub const RESUMED: &str = "Resumed session";
+    pub const TORN: &str = "A cut-off last line was set aside";
+}
+
+/// Messages on the status line.
+pub mod status {
+    pub const WELCOME: &str =
+        "Pick a sample point and a product (Enter), then Tab to Readings; ? lists keys.";
+    pub const WRITER_GONE: &str = "The journal writer has stopped; nothing more can be saved.";
+    pub const RESUMED: &str = "Session resumed with";
+    pub const RECORDS: &str = "records";
+    pub const RESUMED_TAIL: &str = "new records go to the same file";
+    pub const SIGNAL: &str = "rheoside: stopped by a signal; the journal was flushed.";
+}
+
+/// Printed after the terminal is given back.
+pub mod exit {
+    pub const SAVED_TO: &str = "rheoside: session journal";
+    pub const RECORDS: &str = "records";
+    pub const UNSAVED: &str = "rheoside: records could not be saved";
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// Lines drawn on one row of an 80-column screen must fit it whole.
+    #[test]
+    fn one_line_texts_fit_80_columns() {
+        let lines = [
+            caution::SITE,
+            caution::READINGS,
+            caution::CURVE,
+            caution::JOURNAL,
+            status::WELCOME,
+            readings::OK_HINT,
+            readings::NEED_PRODUCT,
+            readings::SAVED,
+            note::HINT,
+        ];
+        for l in lines {
+            assert!(l.chars().count() <= 80, "{} chars: {l}", l.chars().count());
+        }
+    }
+}

@@ -1,0 +1,242 @@
+//! Drawing the viscometer-set form: picks, viscometer, temperature, the reading table with
+//! what each row will store, notes, and the message for the selected field.
+
+use super::readings_form::{Focus, Form};
+use crate::text::sanitize;
+use crate::tui::ctx::Ctx;
+use crate::tui::layout::row;
+use crate::tui::strings::readings as s;
+use crate::tui::theme::Theme;
+use crate::tui::widgets::field::{Checked, Field};
+use crate::units::Dimension;
+use ratatui::Frame;
+use ratatui::layout::Rect;
+use ratatui::style::Style;
+use ratatui::text::{Line, Span};
+use ratatui::widgets::{Paragraph, Wrap};
+
+const LABEL_W: u16 = 14;
+const SPEED_W: u16 = 14;
+const DIAL_W: u16 = 10;
+/// Column where the speed field starts in a table row ("  1  ").
+const ROW_NUM_W: u16 = 5;
+
+pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx) {
+    let t = &ctx.theme;
+    draw_picks(frame, row(area, 0), ctx);
+    draw_viscometer(frame, row(area, 1), form, ctx);
+    label(frame, row(area, 2), s::TEMPERATURE, t);
+    draw_field(
+        frame,
+        row(area, 2),
+        LABEL_W,
+        16,
+        form,
+        Focus::Temperature,
+        editing,
+        t,
+    );
+    draw_si(frame, row(area, 2), LABEL_W + 18, &form.temperature, t);
+    if form.temperature.value().is_none() && form.temperature.error().is_none() {
+        let hint = Rect {
+            x: area.x + LABEL_W + 18,
+            ..row(area, 2)
+        }
+        .intersection(area);
+        let text = format!(
+            "({} {})",
+            Dimension::Temperature.default_unit(),
+            s::UNLESS_UNIT
+        );
+        frame.render_widget(Paragraph::new(text).style(t.dim), hint);
+    }
+    let speed = format!("{} ({})", s::SPEED, Dimension::Speed.default_unit());
+    let header = format!(
+        "  #  {:<w1$}  {:<w2$}  {}",
+        speed,
+        s::DIAL,
+        s::STORES,
+        w1 = usize::from(SPEED_W),
+        w2 = usize::from(DIAL_W)
+    );
+    frame.render_widget(Paragraph::new(header).style(t.dim), row(area, 3));
+    for (i, r) in form.rows.iter().enumerate() {
+        let line = row(area, 4 + i as u16);
+        let number = Span::styled(format!("{:>3}", i + 1), t.dim);
+        frame.render_widget(Paragraph::new(number), line);
+        draw_field(
+            frame,
+            line,
+            ROW_NUM_W,
+            SPEED_W,
+            form,
+            Focus::Speed(i),
+            editing,
+            t,
+        );
+        draw_field(
+            frame,
+            line,
+            ROW_NUM_W + SPEED_W + 2,
+            DIAL_W,
+            form,
+            Focus::Dial(i),
+            editing,
+            t,
+        );
+        let stored = Rect {
+            x: line.x + ROW_NUM_W + SPEED_W + DIAL_W + 4,
+            ..line
+        }
+        .intersection(line);
+        frame.render_widget(Paragraph::new(row_stored(&r.speed, &r.dial, t)), stored);
+    }
+    let notes_row = 4 + form.rows.len() as u16;
+    label(frame, row(area, notes_row), s::NOTES, t);
+    let notes_w = area.width.saturating_sub(LABEL_W + 1);
+    draw_field(
+        frame,
+        row(area, notes_row),
+        LABEL_W,
+        notes_w,
+        form,
+        Focus::Notes,
+        editing,
+        t,
+    );
+    let message = Rect {
+        y: area.y + notes_row + 2,
+        height: 2,
+        ..area
+    }
+    .intersection(area);
+    frame.render_widget(message_for(form, t), message);
+}
+
+/// Styles only the label's own cells, so fields drawn beside it start from plain cells.
+fn label(frame: &mut Frame, area: Rect, text: &str, t: &Theme) {
+    frame.render_widget(Paragraph::new(Span::styled(text, t.dim)), area);
+}
+
+fn draw_picks(frame: &mut Frame, area: Rect, ctx: &Ctx) {
+    let t = &ctx.theme;
+    let picked = |v: &Option<String>| match v {
+        Some(x) => Span::styled(sanitize(x, false), t.title),
+        None => Span::styled(s::NOT_PICKED, t.warn),
+    };
+    let line = Line::from(vec![
+        Span::styled(
+            format!("{:<w$}", s::SAMPLE_POINT, w = usize::from(LABEL_W)),
+            t.dim,
+        ),
+        picked(&ctx.picks.equipment),
+        Span::styled(format!("   {}  ", s::PRODUCT), t.dim),
+        picked(&ctx.picks.product),
+    ]);
+    frame.render_widget(Paragraph::new(line), area);
+}
+
+fn draw_viscometer(frame: &mut Frame, area: Rect, form: &Form, ctx: &Ctx) {
+    let t = &ctx.theme;
+    let focused = form.focus == Focus::Viscometer;
+    let (name, desc) = match ctx.site.viscometers.get(form.viscometer) {
+        Some(v) => (
+            format!("< {} >", sanitize(&v.id, false)),
+            sanitize(&v.description, false),
+        ),
+        None => (s::NO_VISCOMETER.to_string(), String::new()),
+    };
+    let style = if focused { t.selected } else { t.base };
+    let line = Line::from(vec![
+        Span::styled(
+            format!("{:<w$}", s::VISCOMETER, w = usize::from(LABEL_W)),
+            t.dim,
+        ),
+        Span::styled(name, style),
+        Span::styled(format!("  {desc}"), t.dim),
+    ]);
+    frame.render_widget(Paragraph::new(line), area);
+}
+
+/// A field at column `x` of `line`, `width` wide, styled by focus and editing.
+#[allow(clippy::too_many_arguments)]
+fn draw_field(
+    frame: &mut Frame,
+    line: Rect,
+    x: u16,
+    width: u16,
+    form: &Form,
+    focus: Focus,
+    editing: bool,
+    t: &Theme,
+) {
+    let Some(field) = form.field(focus) else {
+        return;
+    };
+    let area = Rect {
+        x: line.x.saturating_add(x),
+        width,
+        ..line
+    }
+    .intersection(line);
+    let selected = form.focus == focus;
+    let style = match (selected, editing) {
+        (true, true) => t.field_editing,
+        (true, false) => t.selected,
+        _ if field.error().is_some() => t.error,
+        _ => t.field,
+    };
+    if let Some(pos) = field.render(area, frame.buffer_mut(), style, selected && editing) {
+        frame.set_cursor_position(pos);
+    }
+    if field.error().is_some() {
+        let mark = Rect {
+            x: area.right(),
+            width: 1,
+            ..area
+        }
+        .intersection(line);
+        frame.render_widget(Paragraph::new("!").style(t.error), mark);
+    }
+}
+
+fn draw_si(frame: &mut Frame, line: Rect, x: u16, field: &Field, t: &Theme) {
+    let area = Rect {
+        x: line.x.saturating_add(x),
+        ..line
+    }
+    .intersection(line);
+    let text = match field.checked() {
+        Checked::Value(_) => format!("= {}", field.si_text()),
+        _ => String::new(),
+    };
+    frame.render_widget(Paragraph::new(text).style(t.ok), area);
+}
+
+/// What a row will store ("62.8 rad/s"; bright once the row has a dial value), or
+/// which part is wrong.
+fn row_stored<'a>(speed: &Field, dial: &Field, t: &Theme) -> Line<'a> {
+    let problem = speed
+        .error()
+        .map(|e| (s::SPEED, e))
+        .or(dial.error().map(|e| (s::DIAL, e)));
+    if let Some((which, err)) = problem {
+        return Line::styled(format!("{which}: {err}"), t.error);
+    }
+    match (speed.value(), dial.value()) {
+        // A dial value is a plain number, stored as typed: only the speed needs an echo.
+        (Some(_), Some(_)) => Line::styled(speed.si_text(), t.ok),
+        (Some(_), None) => Line::styled(speed.si_text(), t.dim),
+        (None, Some(_)) => Line::styled(format!("! {}", s::DIAL_NEEDS_SPEED), t.error),
+        (None, None) => Line::default(),
+    }
+}
+
+/// The selected field's problem in words, or a hint.
+fn message_for(form: &Form, t: &Theme) -> Paragraph<'static> {
+    let (text, style): (String, Style) = match form.field(form.focus).and_then(Field::error) {
+        Some(err) => (format!("! {err}"), t.error),
+        None => (s::OK_HINT.to_string(), t.dim),
+    };
+    Paragraph::new(text).style(style).wrap(Wrap { trim: true })
+}

@@ -1,0 +1,275 @@
+//! Screens of the terminal UI drawn into ratatui's `TestBackend`: whole-screen snapshots at
+//! 80×24, the "too small" screen at 20×5, overlays that must stay inside tiny frames,
+//! NO_COLOR and ASCII modes, resizing, and the bytes one typed digit costs on the wire.
+
+use chrono::DateTime;
+use ratatui::Terminal;
+use ratatui::backend::{CrosstermBackend, TestBackend};
+use ratatui::buffer::Buffer;
+use ratatui::crossterm::event::{KeyCode, KeyEvent};
+use ratatui::layout::Rect;
+use ratatui::style::{Color, Modifier};
+use ratatui::{TerminalOptions, Viewport};
+use rheoside::tui::app::App;
+use rheoside::tui::theme::{ColourMode, Glyphs, Theme};
+use rheoside::tui::writer::Reply;
+use rheoside::tui::{render, startup};
+use std::io::{self, Write};
+use std::sync::Arc;
+use std::sync::atomic::{AtomicUsize, Ordering};
+
+fn app_with(mode: ColourMode, glyphs: Glyphs) -> App {
+    let site = rheoside::site::demo().expect("the demo site loads");
+    let now = DateTime::parse_from_rfc3339("2026-12-01T08:00:00+01:00").expect("a valid time");
+    startup::app_for(
+        site,
+        "ana",
+        Theme::new(mode, glyphs),
+        now,
+        "logs/test.jsonl",
+    )
+}
+
+fn app() -> App {
+    app_with(ColourMode::Plain, Glyphs::Unicode)
+}
+
+fn keys(app: &mut App, codes: &[KeyCode]) {
+    for c in codes {
+        app.on_key(&KeyEvent::from(*c));
+    }
+}
+
+fn text(app: &mut App, s: &str) {
+    for c in s.chars() {
+        app.on_key(&KeyEvent::from(KeyCode::Char(c)));
+    }
+}
+
+fn draw(app: &App, w: u16, h: u16) -> Buffer {
+    let mut t = Terminal::new(TestBackend::new(w, h)).expect("a test terminal");
+    t.draw(|f| render::draw(app, f))
+        .expect("drawing into memory");
+    t.backend().buffer().clone()
+}
+
+fn lines(buf: &Buffer) -> String {
+    (0..buf.area.height)
+        .map(|y| {
+            (0..buf.area.width)
+                .map(|x| buf[(x, y)].symbol())
+                .collect::<String>()
+        })
+        .collect::<Vec<_>>()
+        .join("\n")
+}
+
+/// Picks, six invented readings of an HB-like sauce, 45 C, saved.
+fn with_saved_set() -> App {
+    let mut a = app();
+    keys(&mut a, &[KeyCode::Enter, KeyCode::Enter, KeyCode::Tab]);
+    for d in ["110", "76", "61.5", "44", "16", "14"] {
+        text(&mut a, d);
+        keys(&mut a, &[KeyCode::Enter]);
+    }
+    keys(&mut a, &[KeyCode::Home, KeyCode::Down]);
+    text(&mut a, "45 C");
+    keys(&mut a, &[KeyCode::Enter, KeyCode::Char('s')]);
+    a
+}
+
+#[test]
+fn site_view_at_80x24() {
+    insta::assert_snapshot!("site_80x24", lines(&draw(&app(), 80, 24)));
+}
+
+#[test]
+fn readings_form_shows_si_values_and_what_is_wrong() {
+    let mut a = app();
+    keys(&mut a, &[KeyCode::Enter, KeyCode::Enter, KeyCode::Tab]);
+    text(&mut a, "52");
+    keys(&mut a, &[KeyCode::Enter]);
+    text(&mut a, "4O");
+    insta::assert_snapshot!("readings_80x24", lines(&draw(&a, 80, 24)));
+}
+
+#[test]
+fn flow_curve_view_shows_the_fit_and_its_constants() {
+    let mut a = with_saved_set();
+    let before = lines(&draw(&a, 80, 24));
+    assert!(before.contains("sending"), "{before}");
+    a.on_reply(&Reply {
+        ticket: Some(1),
+        seq: Some(2),
+        saved_through: 2,
+        pending: 0,
+        error: None,
+        closed: false,
+    });
+    let s = lines(&draw(&a, 80, 24));
+    for want in [
+        "Herschel–Bulkley (auto)",
+        "τ0 yield stress",
+        "K consistency index",
+        "n flow behaviour index",
+        "R² ",
+        "RMSE",
+        "Why:",
+        "Apparent viscosity at",
+        "journal saved",
+        "Check the fit against the points before acting on it",
+    ] {
+        assert!(s.contains(want), "missing {want:?} in\n{s}");
+    }
+    // The two 3 and 6 rpm readings sit below 10 % of the 300-degree scale: flagged (×).
+    assert_eq!(
+        s.matches('×').count(),
+        2 + 1,
+        "two flagged points and the legend:\n{s}"
+    );
+}
+
+#[test]
+fn the_journal_view_lists_records_with_their_state() {
+    let mut a = app();
+    text(&mut a, "n");
+    text(&mut a, "first note");
+    keys(&mut a, &[KeyCode::Enter, KeyCode::BackTab]);
+    insta::assert_snapshot!("journal_80x24", lines(&draw(&a, 80, 24)));
+}
+
+#[test]
+fn below_80x24_a_too_small_screen_is_drawn() {
+    insta::assert_snapshot!("tiny_20x5", lines(&draw(&app(), 20, 5)));
+    assert!(lines(&draw(&app(), 79, 24)).contains("too small (79x24)"));
+    assert!(lines(&draw(&app(), 80, 23)).contains("too small (80x23)"));
+}
+
+#[test]
+fn overlays_stay_inside_tiny_frames() {
+    let mut a = with_saved_set();
+    text(&mut a, "?");
+    insta::assert_snapshot!("help_80x24", lines(&draw(&a, 80, 24)));
+    for (w, h) in [(20, 5), (1, 1), (80, 3), (3, 40)] {
+        let _ = draw(&a, w, h);
+    }
+    let mut b = app();
+    keys(&mut b, &[KeyCode::Tab]);
+    text(&mut b, "5");
+    keys(&mut b, &[KeyCode::Enter]);
+    text(&mut b, "q");
+    insta::assert_snapshot!("confirm_80x24", lines(&draw(&b, 80, 24)));
+    let tiny = lines(&draw(&b, 20, 5));
+    assert!(tiny.contains("Quit?"), "{tiny}");
+}
+
+#[test]
+fn without_colour_selection_is_reverse_video() {
+    let mut a = app_with(ColourMode::Plain, Glyphs::Unicode);
+    keys(&mut a, &[KeyCode::Tab]);
+    let buf = draw(&a, 80, 24);
+    for cell in buf.content() {
+        assert!(
+            matches!(cell.fg, Color::Reset),
+            "colour {:?} at {:?}",
+            cell.fg,
+            cell.symbol()
+        );
+        assert!(matches!(cell.bg, Color::Reset));
+    }
+    // The selected field (first dial, row 1) is drawn reversed; the active tab too.
+    let dial = &buf[(1 + 5 + 14 + 2, 7)];
+    assert!(dial.modifier.contains(Modifier::REVERSED), "{dial:?}");
+    let tab = &buf[(12, 1)];
+    assert!(tab.modifier.contains(Modifier::REVERSED), "{tab:?}");
+}
+
+#[test]
+fn with_colour_only_named_ansi_colours_are_used() {
+    let a = with_saved_set();
+    let buf = draw(&a, 80, 24);
+    for cell in buf.content() {
+        for c in [cell.fg, cell.bg] {
+            assert!(!matches!(c, Color::Rgb(..) | Color::Indexed(_)), "{c:?}");
+        }
+    }
+}
+
+#[test]
+fn ascii_mode_uses_plain_borders_and_marks() {
+    let mut a = app_with(ColourMode::Plain, Glyphs::Ascii);
+    let site = lines(&draw(&a, 80, 24));
+    assert!(
+        site.lines()
+            .nth(2)
+            .is_some_and(|l| l.starts_with("+ Sample point")),
+        "{site}"
+    );
+    keys(&mut a, &[KeyCode::Enter, KeyCode::Enter, KeyCode::Tab]);
+    for d in ["110", "76", "61.5", "44", "16", "14"] {
+        text(&mut a, d);
+        keys(&mut a, &[KeyCode::Enter]);
+    }
+    text(&mut a, "s");
+    let s = lines(&draw(&a, 80, 24));
+    // The chart and every border are plain ASCII (units such as Pa·s are text, not marks).
+    let chart: String = s
+        .lines()
+        .skip(2)
+        .map(|l| l.chars().take(41).collect::<String>())
+        .collect();
+    assert!(chart.is_ascii(), "{s}");
+    assert!(
+        !s.chars().any(|c| ('\u{2500}'..='\u{259f}').contains(&c)),
+        "{s}"
+    );
+    assert!(s.contains("o measured  x flagged  . fit"), "{s}");
+}
+
+#[test]
+fn resizing_redraws_cleanly() {
+    let a = with_saved_set();
+    let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");
+    for (w, h) in [(80, 24), (200, 60), (20, 5), (0, 0), (81, 25), (80, 24)] {
+        t.backend_mut().resize(w, h);
+        t.draw(|f| render::draw(&a, f))
+            .expect("drawing into memory");
+    }
+    assert_eq!(*t.backend().buffer(), draw(&a, 80, 24));
+}
+
+/// Counts what the app sends to the terminal.
+#[derive(Clone, Default)]
+struct Counter(Arc<AtomicUsize>);
+
+impl Write for Counter {
+    fn write(&mut self, buf: &[u8]) -> io::Result<usize> {
+        self.0.fetch_add(buf.len(), Ordering::Relaxed);
+        Ok(buf.len())
+    }
+    fn flush(&mut self) -> io::Result<()> {
+        Ok(())
+    }
+}
+
+#[test]
+fn typing_a_digit_sends_at_most_64_bytes() {
+    let mut a = app_with(ColourMode::Colour, Glyphs::Unicode);
+    keys(&mut a, &[KeyCode::Enter, KeyCode::Enter, KeyCode::Tab]);
+    text(&mut a, "5");
+    let counter = Counter::default();
+    let options = TerminalOptions {
+        viewport: Viewport::Fixed(Rect::new(0, 0, 80, 24)),
+    };
+    let mut t = Terminal::with_options(CrosstermBackend::new(counter.clone()), options)
+        .expect("a terminal");
+    t.draw(|f| render::draw(&a, f)).expect("first frame");
+    let first = counter.0.swap(0, Ordering::Relaxed);
+    text(&mut a, "2");
+    t.draw(|f| render::draw(&a, f)).expect("next frame");
+    let typed = counter.0.load(Ordering::Relaxed);
+    assert!(first > 1000, "a whole first frame is {first} bytes");
+    // The typed digit, its SI echo in the row and the cursor move; target from the brief.
+    eprintln!("first frame {first} bytes, one typed digit {typed} bytes");
+    assert!(typed <= 64, "typing one digit sent {typed} bytes");
+}
