@@ -55,7 +55,7 @@ const DYNAMIC_VISCOSITY: &[&str] = &["Pa.s", "mPa.s", "cP", "P"];
 const KINEMATIC_VISCOSITY: &[&str] = &["cSt", "mm2/s", "m2/s"];
 const SPEED: &[&str] = &["rpm", "rps", "rad/s"];
 const DENSITY: &[&str] = &["kg/m3", "g/cm3", "g/mL", "lb/ft3", "lb/gal", "SG"];
-const TEMPERATURE: &[&str] = &["C", "F", "K"];
+const TEMPERATURE: &[&str] = &["°C", "°F", "K"];
 const POWER: &[&str] = &["W", "kW", "hp"];
 const CURRENT: &[&str] = &["A"];
 const VOLTAGE: &[&str] = &["V", "kV"];
@@ -149,7 +149,7 @@ impl Dimension {
             Dimension::KinematicViscosity => "cSt",
             Dimension::Speed => "rpm",
             Dimension::Density => "kg/m3",
-            Dimension::Temperature => "C",
+            Dimension::Temperature => "°C",
             Dimension::Power => "kW",
             Dimension::Current => "A",
             Dimension::Voltage => "V",

@@ -172,7 +172,7 @@ fn dimension_facts_other_modules_rely_on() {
         (Dimension::Pressure, "bar"),
         (Dimension::Length, "mm"),
         (Dimension::Speed, "rpm"),
-        (Dimension::Temperature, "C"),
+        (Dimension::Temperature, "°C"),
         (Dimension::DynamicViscosity, "mPa.s"),
         (Dimension::Flow, "m3/h"),
         (Dimension::Stress, "Pa"),
