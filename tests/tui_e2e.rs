@@ -355,3 +355,54 @@ fn without_a_terminal_it_points_to_the_subcommands() {
     assert!(text.contains("rheoside --help"), "{text}");
     assert_eq!(text.lines().count(), 1);
 }
+
+/// A dropped SSH session or a killed tmux closes the terminal under the program: it must
+/// notice, journal its session end and exit, not spin on the dead terminal. Driven through
+/// tmux because `tmux kill-server` hangs up the terminal the way an operator's dropped
+/// session does (a bare pty close is also sent a SIGHUP that can mask the bug). `.ci/run`
+/// installs tmux.
+#[test]
+fn terminal_hang_up_ends_the_session_cleanly() {
+    if std::process::Command::new("tmux")
+        .arg("-V")
+        .output()
+        .is_err()
+    {
+        eprintln!("tmux not installed: hang-up test not run (.ci/run installs it)");
+        return;
+    }
+    let logs = tempfile::tempdir().expect("a temp dir");
+    let socket = format!("rheoside-hangup-{}", std::process::id());
+    let tmux = |args: &[&str]| {
+        std::process::Command::new("tmux")
+            .args(["-L", &socket, "-f", "/dev/null"])
+            .args(args)
+            .output()
+            .expect("tmux runs")
+    };
+    let bin = assert_cmd::cargo::cargo_bin("rheoside");
+    let command = format!(
+        "{} --log-dir {} --operator night",
+        bin.display(),
+        logs.path().display()
+    );
+    tmux(&["new-session", "-d", "-x", "80", "-y", "24", &command]);
+    let start = Instant::now();
+    while !String::from_utf8_lossy(&tmux(&["capture-pane", "-p"]).stdout).contains("Sample point") {
+        assert!(start.elapsed() < WAIT, "the first screen never came");
+        std::thread::sleep(Duration::from_millis(50));
+    }
+    tmux(&["kill-server"]);
+    let start = Instant::now();
+    loop {
+        let loaded = load(&journal_in(logs.path())).expect("the journal loads");
+        if loaded.records.last().map(|r| &r.payload) == Some(&Payload::SessionEnd) {
+            break;
+        }
+        assert!(
+            start.elapsed() < Duration::from_secs(10),
+            "no session end journalled after the terminal hung up"
+        );
+        std::thread::sleep(Duration::from_millis(50));
+    }
+}

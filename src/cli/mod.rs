@@ -32,7 +32,9 @@ pub fn main() -> ExitCode {
     match outcome {
         Ok(code) => code,
         Err(err) => {
-            eprintln!("rheoside: {err:#}");
+            // Best effort: after a terminal hang-up stderr may be gone, and eprintln! panics.
+            use std::io::Write as _;
+            let _ = writeln!(std::io::stderr(), "rheoside: {err:#}");
             ExitCode::from(EXIT_BAD_INPUT)
         }
     }

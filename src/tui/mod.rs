@@ -87,6 +87,10 @@ fn run_loop(
                 dirty = true;
             }
             Some(Input::Resize) => dirty = true,
+            Some(Input::HangUp) => {
+                app.force_quit();
+                break;
+            }
             None => {}
         }
     }

@@ -123,16 +123,25 @@ fn load_site(cli: &Cli) -> Result<(Site, String), ExitCode> {
 
 /// After the terminal is back: where the journal is, or what could not be saved.
 pub fn farewell(app: &App, signalled: bool) -> ExitCode {
+    // After a hang-up the terminal is gone and writing to it fails; `println!` would panic
+    // then, so the parting lines are best effort.
+    use std::io::Write as _;
     let unsaved = app.ctx.log.unsaved();
     if unsaved > 0 {
-        eprintln!("{} ({unsaved}): {}", exit::UNSAVED, app.ctx.journal_path);
+        let _ = writeln!(
+            std::io::stderr(),
+            "{} ({unsaved}): {}",
+            exit::UNSAVED,
+            app.ctx.journal_path
+        );
         return ExitCode::FAILURE;
     }
     if signalled {
-        eprintln!("{}", status::SIGNAL);
+        let _ = writeln!(std::io::stderr(), "{}", status::SIGNAL);
     }
     let saved = app.ctx.log.saved_through();
-    println!(
+    let _ = writeln!(
+        std::io::stdout(),
         "{} {} ({saved} {})",
         exit::SAVED_TO,
         app.ctx.journal_path,
