@@ -1,8 +1,47 @@
-//! The `trend` subcommand (being built).
+//! `rheoside trend --product P [--since 30d]`: a product's fitted constants over past
+//! sessions against its spec limits, as a table and an ASCII chart.
+//!
+//! The clock is read once, here; everything after takes that `now`.
 
 use super::args::{Cli, TrendArgs};
+#[path = "trend_chart.rs"]
+mod trend_chart;
+#[path = "trend_print.rs"]
+mod trend_print;
+#[path = "trend_scan.rs"]
+mod trend_scan;
+#[path = "trend_text.rs"]
+pub(super) mod trend_text;
+use crate::session::trend::{TrendBuilder, find_product, parse_since};
+use crate::site::Site;
+use std::path::PathBuf;
 use std::process::ExitCode;
 
-pub fn run(_cli: &Cli, _args: &TrendArgs) -> anyhow::Result<ExitCode> {
-    anyhow::bail!("this command is not built yet")
+pub fn run(cli: &Cli, args: &TrendArgs) -> anyhow::Result<ExitCode> {
+    let site = site_or_demo(cli)?;
+    let product = find_product(&site, &args.product)?;
+    let window = parse_since(&args.since)?;
+    let now = chrono::Utc::now();
+    let dir = cli.log_dir.clone().unwrap_or_else(|| PathBuf::from("logs"));
+    let mut builder = TrendBuilder::new(&site, product, now, window);
+    let scan = trend_scan::scan_dir(&dir, &product.name, &mut builder)?;
+    let trend = builder.finish();
+    let system = site.unit_system;
+    let mut out = trend_print::heading(&site, product, &trend, &args.since);
+    out.push_str(&trend_print::table(&trend, system));
+    if !trend.points.is_empty() {
+        out.push_str(&trend_chart::chart(&trend, product, system));
+    }
+    out.push_str(&trend_print::footer(&trend, &scan));
+    print!("{out}");
+    Ok(ExitCode::SUCCESS)
+}
+
+/// The site from `--site`, else the bundled demo (an invented plant).
+pub(super) fn site_or_demo(cli: &Cli) -> anyhow::Result<Site> {
+    let loaded = match &cli.site {
+        Some(path) => crate::site::load_file(path),
+        None => crate::site::demo(),
+    };
+    loaded.map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}"))
 }

@@ -5,8 +5,11 @@
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
 pub mod flow_curve;
+pub mod state;
 pub mod temperature;
+pub mod trend;
 
 pub use flow_curve::{
     FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, PointOut, analyse,
 };
+pub use state::{Entry, Moment, SessionState, SetError};
