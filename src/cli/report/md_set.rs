@@ -1,10 +1,10 @@
 //! One viscometer set in the Markdown handover: its rows, the recomputed fit with 95 %
 //! intervals, the spec limits, and what was saved at the time.
 
-use super::report_md::{byline, cell};
-use super::report_seen::{Agreement, compare, seen_for, seen_text};
+use super::md::{byline, cell};
+use super::seen::{Agreement, compare, seen_for, seen_text};
 use crate::cli::fit_output::param_text;
-use crate::cli::trend::trend_text::{check_text, describe_limit, rate_text, value_text};
+use crate::cli::trend::text::{check_text, describe_limit, rate_text, value_text};
 use crate::rheology::{Estimate, Fit};
 use crate::session::FlowCurve;
 use crate::session::state::{Entry, SessionState, ViscometerSet};

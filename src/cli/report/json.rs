@@ -1,7 +1,7 @@
 //! The handover as one JSON object for scripts. Key names are a contract: add keys, never
 //! rename. SI units throughout; keys print sorted, so the same journals give the same bytes.
 
-use super::report_seen::{Agreement, compare, linked_set, seen_for};
+use super::seen::{Agreement, compare, linked_set, seen_for};
 use super::{CAUTIONS, Inputs, Journal, dimension_of, problems, rfc3339};
 use crate::cli::fit_output;
 use crate::session::FlowCurveOptions;

@@ -1,7 +1,7 @@
 //! The `trend` table: one row per session, out-of-limit sessions marked in words.
 
-use super::trend_scan::ScanCounts;
-use super::trend_text::{describe_limits, out_text, param_cell, rate_text, unchecked_text};
+use super::scan::ScanCounts;
+use super::text::{describe_limits, out_text, param_cell, rate_text, unchecked_text};
 use crate::rheology::{ModelKind, ParamName};
 use crate::session::trend::{Constants, SessionPoint, Trend};
 use crate::site::{Product, Site};

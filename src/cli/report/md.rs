@@ -1,7 +1,7 @@
 //! The Markdown handover: one section per session, then the cautions.
 
-use super::report_md_set::set_section;
-use super::report_seen::{compact, linked_set};
+use super::md_set::set_section;
+use super::seen::{compact, linked_set};
 use super::{CAUTIONS, Inputs, Journal, clean, local_text, problems, reading_value, utc_text};
 use crate::session::state::{Entry, Moment, SessionState};
 use crate::site::Site;

@@ -5,16 +5,11 @@
 //! config: no "generated at" stamp, sessions in start-time order, records in `seq` order,
 //! so the same journals give the same bytes.
 
-#[path = "report_csv.rs"]
-mod report_csv;
-#[path = "report_json.rs"]
-mod report_json;
-#[path = "report_md.rs"]
-mod report_md;
-#[path = "report_md_set.rs"]
-mod report_md_set;
-#[path = "report_seen.rs"]
-mod report_seen;
+mod csv;
+mod json;
+mod md;
+mod md_set;
+mod seen;
 
 use super::args::{Cli, ReportArgs};
 use super::trend::site_or_demo;
@@ -93,9 +88,9 @@ pub fn run(cli: &Cli, args: &ReportArgs) -> anyhow::Result<ExitCode> {
         }
     }
     let bytes = match format {
-        Format::Markdown => report_md::render(&inputs).into_bytes(),
-        Format::Csv => report_csv::render(&inputs)?,
-        Format::Json => report_json::render(&inputs)?.into_bytes(),
+        Format::Markdown => md::render(&inputs).into_bytes(),
+        Format::Csv => csv::render(&inputs)?,
+        Format::Json => json::render(&inputs)?.into_bytes(),
     };
     std::io::stdout().lock().write_all(&bytes)?;
     Ok(if inputs.failed.is_empty() {

@@ -4,14 +4,10 @@
 //! The clock is read once, here; everything after takes that `now`.
 
 use super::args::{Cli, TrendArgs};
-#[path = "trend_chart.rs"]
-mod trend_chart;
-#[path = "trend_print.rs"]
-mod trend_print;
-#[path = "trend_scan.rs"]
-mod trend_scan;
-#[path = "trend_text.rs"]
-pub(super) mod trend_text;
+mod chart;
+mod print;
+mod scan;
+pub(super) mod text;
 use crate::session::trend::{TrendBuilder, find_product, parse_since};
 use crate::site::Site;
 use std::path::PathBuf;
@@ -24,15 +20,15 @@ pub fn run(cli: &Cli, args: &TrendArgs) -> anyhow::Result<ExitCode> {
     let now = chrono::Utc::now();
     let dir = cli.log_dir.clone().unwrap_or_else(|| PathBuf::from("logs"));
     let mut builder = TrendBuilder::new(&site, product, now, window);
-    let scan = trend_scan::scan_dir(&dir, &product.name, &mut builder)?;
+    let scan = scan::scan_dir(&dir, &product.name, &mut builder)?;
     let trend = builder.finish();
     let system = site.unit_system;
-    let mut out = trend_print::heading(&site, product, &trend, &args.since);
-    out.push_str(&trend_print::table(&trend, system));
+    let mut out = print::heading(&site, product, &trend, &args.since);
+    out.push_str(&print::table(&trend, system));
     if !trend.points.is_empty() {
-        out.push_str(&trend_chart::chart(&trend, product, system));
+        out.push_str(&chart::chart(&trend, product, system));
     }
-    out.push_str(&trend_print::footer(&trend, &scan));
+    out.push_str(&print::footer(&trend, &scan));
     print!("{out}");
     Ok(ExitCode::SUCCESS)
 }
