@@ -10,7 +10,7 @@ use super::widgets::field::{Field, FieldKind};
 use ratatui::Frame;
 use ratatui::layout::Rect;
 use ratatui::text::{Line, Span};
-use ratatui::widgets::{Block, Borders, Clear, Paragraph, Wrap};
+use ratatui::widgets::{Clear, Paragraph, Wrap};
 
 /// Longest note accepted (one journal line stays readable).
 const NOTE_MAX_CHARS: usize = 500;
@@ -35,14 +35,6 @@ impl Overlay {
         field.begin_edit();
         Overlay::Note(field)
     }
-}
-
-fn boxed<'a>(title: &'a str, t: &Theme) -> Block<'a> {
-    Block::new()
-        .borders(Borders::ALL)
-        .border_set(t.marks.border)
-        .title(title)
-        .title_style(t.title)
 }
 
 /// Every binding, by where it applies; the views' own sections in tab order.
@@ -91,8 +83,9 @@ pub fn help_lines(views: &[ViewId], t: &Theme) -> Vec<Line<'static>> {
 pub fn draw_help(frame: &mut Frame, scroll: u16, views: &[ViewId], t: &Theme) {
     let area = popup(frame.area(), 74, frame.area().height.saturating_sub(2));
     let lines = help_lines(views, t);
-    let block =
-        boxed(hs::TITLE, t).title_bottom(Line::styled(format!(" {} ", hs::SCROLL_HINT), t.dim));
+    let block = t
+        .panel(hs::TITLE)
+        .title_bottom(Line::styled(format!(" {} ", hs::SCROLL_HINT), t.dim));
     let inner = block.inner(area);
     let max_scroll = (lines.len() as u16).saturating_sub(inner.height);
     frame.render_widget(Clear, area);
@@ -125,13 +118,13 @@ pub fn draw_confirm(frame: &mut Frame, reasons: &[String], t: &Theme) {
     frame.render_widget(Clear, area);
     let para = Paragraph::new(lines)
         .wrap(Wrap { trim: true })
-        .block(boxed(cs::TITLE, t));
+        .block(t.panel(cs::TITLE));
     frame.render_widget(para, area);
 }
 
 pub fn draw_note(frame: &mut Frame, field: &Field, t: &Theme) {
     let area = popup(frame.area(), 72, 5);
-    let block = boxed(ns::TITLE, t);
+    let block = t.panel(ns::TITLE);
     let inner = block.inner(area);
     frame.render_widget(Clear, area);
     frame.render_widget(block, area);

@@ -118,6 +118,18 @@ pub struct Theme {
 }
 
 impl Theme {
+    /// A bordered panel in this theme's border marks (plain ASCII with `--ascii`).
+    pub fn panel<'a>(
+        &self,
+        title: impl Into<ratatui::text::Line<'a>>,
+    ) -> ratatui::widgets::Block<'a> {
+        ratatui::widgets::Block::new()
+            .borders(ratatui::widgets::Borders::ALL)
+            .border_set(self.marks.border)
+            .title(title)
+            .title_style(self.title)
+    }
+
     pub fn new(mode: ColourMode, glyphs: Glyphs) -> Theme {
         let c = |colour: Color| match mode {
             ColourMode::Colour => Style::new().fg(colour),

@@ -17,7 +17,7 @@ use crate::units::significant;
 use ratatui::Frame;
 use ratatui::layout::{Constraint, Layout, Rect};
 use ratatui::text::{Line, Span};
-use ratatui::widgets::{Block, Borders, Paragraph, Wrap};
+use ratatui::widgets::{Paragraph, Wrap};
 
 /// Width of the model panel; the chart takes the rest.
 const PANEL_W: u16 = 38;
@@ -32,14 +32,6 @@ pub struct CurveScreen<'a> {
     pub rate: &'a Field,
     pub apparent: Option<f64>,
     pub editing: bool,
-}
-
-fn block<'a>(title: &'a str, t: &Theme) -> Block<'a> {
-    Block::new()
-        .borders(Borders::ALL)
-        .border_set(t.marks.border)
-        .title(title)
-        .title_style(t.title)
 }
 
 impl CurveScreen<'_> {
@@ -86,14 +78,14 @@ impl CurveScreen<'_> {
             let para = Paragraph::new(text)
                 .style(t.warn)
                 .wrap(Wrap { trim: true })
-                .block(block(s::WARNINGS, t));
+                .block(t.panel(s::WARNINGS));
             frame.render_widget(para, warnings);
         }
     }
 
     fn draw_panel(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
         let t = &ctx.theme;
-        let outer = block(s::MODEL_TITLE, t);
+        let outer = t.panel(s::MODEL_TITLE);
         let inner = outer.inner(area);
         frame.render_widget(outer, area);
         let [text_area, rate_area] =
@@ -232,7 +224,7 @@ fn draw_message(frame: &mut Frame, area: Rect, text: &str, t: &Theme) {
     let para = Paragraph::new(text.to_string())
         .style(t.dim)
         .wrap(Wrap { trim: true })
-        .block(block(s::CHART_TITLE, t));
+        .block(t.panel(s::CHART_TITLE));
     frame.render_widget(para, area);
 }
 
@@ -259,7 +251,9 @@ fn draw_chart(frame: &mut Frame, area: Rect, shown: &Shown, t: &Theme) {
         m.fit,
         s::LEGEND_FIT
     );
-    let b = block(s::CHART_TITLE, t).title_bottom(Line::styled(legend, t.dim));
+    let b = t
+        .panel(s::CHART_TITLE)
+        .title_bottom(Line::styled(legend, t.dim));
     let inner = b.inner(area);
     frame.render_widget(b, area);
     let chart = LogChart {
@@ -294,5 +288,5 @@ fn draw_points(frame: &mut Frame, area: Rect, shown: &Shown, t: &Theme) {
             p.flags.join(", ")
         )));
     }
-    frame.render_widget(Paragraph::new(lines).block(block(s::POINTS_TITLE, t)), area);
+    frame.render_widget(Paragraph::new(lines).block(t.panel(s::POINTS_TITLE)), area);
 }

@@ -13,7 +13,7 @@ use crate::tui::theme::Theme;
 use ratatui::Frame;
 use ratatui::layout::Rect;
 use ratatui::text::{Line, Span};
-use ratatui::widgets::{Block, Borders, Paragraph};
+use ratatui::widgets::Paragraph;
 
 /// Rows a page key moves (the body is at least this tall at 80×24).
 const PAGE: usize = 10;
@@ -85,11 +85,7 @@ impl View for JournalView {
         let room = usize::from(area.width).saturating_sub(s::TITLE.len() + s::FILE.len() + 6);
         let path = clip_start(&sanitize(&ctx.journal_path, false), room);
         let title = format!("{}({} {path}) ", s::TITLE, s::FILE);
-        let block = Block::new()
-            .borders(Borders::ALL)
-            .border_set(t.marks.border)
-            .title(title)
-            .title_style(t.title);
+        let block = t.panel(title);
         let inner = block.inner(area);
         frame.render_widget(block, area);
         let entries = ctx.log.entries();

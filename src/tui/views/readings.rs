@@ -14,7 +14,6 @@ use crate::tui::strings::readings as s;
 use crate::tui::widgets::editing::{self, EditStep, Leave};
 use ratatui::Frame;
 use ratatui::layout::Rect;
-use ratatui::widgets::{Block, Borders};
 use std::sync::Arc;
 
 pub struct ReadingsView {
@@ -198,11 +197,7 @@ impl View for ReadingsView {
     }
 
     fn render(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
-        let block = Block::new()
-            .borders(Borders::ALL)
-            .border_set(ctx.theme.marks.border)
-            .title(s::TITLE)
-            .title_style(ctx.theme.title);
+        let block = ctx.theme.panel(s::TITLE);
         let inner = block.inner(area);
         frame.render_widget(block, area);
         readings_draw::draw(frame, inner, &self.form, self.editing, ctx);

@@ -7,7 +7,7 @@ use ratatui::Frame;
 use ratatui::layout::Rect;
 use ratatui::style::Modifier;
 use ratatui::text::Line;
-use ratatui::widgets::{Block, Borders, Paragraph};
+use ratatui::widgets::Paragraph;
 
 /// One row of a pick list.
 #[derive(Debug, Clone, PartialEq, Eq)]
@@ -31,15 +31,11 @@ pub fn draw_list(
     empty: &str,
     theme: &Theme,
 ) {
-    let block = Block::new()
-        .borders(Borders::ALL)
-        .border_set(theme.marks.border)
-        .title(title)
-        .title_style(if cursor.is_some() {
-            theme.title
-        } else {
-            theme.dim
-        });
+    let block = theme.panel(title).title_style(if cursor.is_some() {
+        theme.title
+    } else {
+        theme.dim
+    });
     let inner = block.inner(area);
     frame.render_widget(block, area);
     if rows.is_empty() {
