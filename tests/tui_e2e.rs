@@ -6,6 +6,7 @@
 use portable_pty::{Child, CommandBuilder, PtySize, native_pty_system};
 use rheoside::instrument::{DialReading, Geometry};
 use rheoside::journal::{Payload, load};
+use rheoside::rheology::ParamName;
 use rheoside::session::{FlowCurveInput, FlowCurveOptions, analyse};
 use std::io::{Read, Write};
 use std::num::NonZeroU16;
@@ -240,6 +241,19 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
     let rows: Vec<(String, f64)> = set.1.iter().map(|r| (r.rpm_raw.clone(), r.dial)).collect();
     let want: Vec<(String, f64)> = SPEEDS.iter().map(|r| r.to_string()).zip(DIALS).collect();
     assert_eq!(rows, want);
+    // The answer shown is journalled right after the set, in the `fit --json` shape.
+    let result = journal
+        .records
+        .iter()
+        .find(|r| r.seq == set.0.seq + 1)
+        .expect("a record after the set");
+    let Payload::Result { what, data } = &result.payload else {
+        panic!("expected the flow-curve result after the set, got {result:?}");
+    };
+    assert!(what.starts_with("flow-curve"), "{what}");
+    assert_eq!(data["model"], "herschel-bulkley");
+    let k = data["params"]["k_pa_sn"].as_f64().expect("K in the result");
+    assert!((k - curve.fit.model.param(ParamName::K).expect("K")).abs() < 1e-12);
     assert!(matches!(
         journal.records.last().map(|r| &r.payload),
         Some(Payload::SessionEnd)
@@ -296,7 +310,7 @@ fn a_resumed_session_shows_its_last_set_and_appends_to_the_same_file() {
         "--operator",
         "day",
     ]);
-    s.wait_for_all(&["Herschel–Bulkley (auto)", "Session resumed with 3 records"]);
+    s.wait_for_all(&["Herschel–Bulkley (auto)", "Session resumed with 4 records"]);
     s.send("nhandover: sauce thickening\r");
     s.wait_for("Note sent to the journal");
     s.wait_for("journal saved");
@@ -314,6 +328,7 @@ fn a_resumed_session_shows_its_last_set_and_appends_to_the_same_file() {
         [
             ("session-start", "night"),
             ("viscometer-set", "night"),
+            ("result", "night"),
             ("session-end", "night"),
             ("note", "day"),
             ("session-end", "day"),

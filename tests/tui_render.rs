@@ -98,14 +98,17 @@ fn flow_curve_view_shows_the_fit_and_its_constants() {
     let mut a = with_saved_set();
     let before = lines(&draw(&a, 80, 24));
     assert!(before.contains("sending"), "{before}");
-    a.on_reply(&Reply {
-        ticket: Some(1),
-        seq: Some(2),
-        saved_through: 2,
-        pending: 0,
-        error: None,
-        closed: false,
-    });
+    // The writer confirms the set and, after it, the flow-curve result journalled with it.
+    for (ticket, seq) in [(1, 2), (2, 3)] {
+        a.on_reply(&Reply {
+            ticket: Some(ticket),
+            seq: Some(seq),
+            saved_through: seq,
+            pending: 0,
+            error: None,
+            closed: false,
+        });
+    }
     let s = lines(&draw(&a, 80, 24));
     for want in [
         "Herschel–Bulkley (auto)",

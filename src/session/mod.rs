@@ -5,6 +5,7 @@
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
 pub mod flow_curve;
+pub mod json;
 pub mod state;
 pub mod temperature;
 pub mod trend;

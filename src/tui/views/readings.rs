@@ -6,6 +6,10 @@ use super::readings_form::{CheckedSet, Focus, Form};
 use super::{Draft, Effect, SavedSet, View, ViewId};
 use crate::instrument::{DialReading, Geometry};
 use crate::journal::Payload;
+use crate::session::FlowCurveOptions;
+use crate::session::json::curve_json;
+use crate::session::state::fit_rows;
+use crate::site::Site;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::Action;
@@ -132,7 +136,13 @@ impl ReadingsView {
                 .map(|r| DialReading::new(r.rpm, r.dial))
                 .collect(),
         });
-        let drafts = drafts(&checked, &visc.id, &product, ctx.picks.equipment.clone());
+        let drafts = drafts(
+            &checked,
+            &visc.id,
+            &product,
+            ctx.picks.equipment.clone(),
+            &ctx.site,
+        );
         self.form.reset(Some(&visc.geometry));
         vec![
             Effect::SaveSet { drafts, set },
@@ -149,12 +159,15 @@ fn status(result: Result<(), &'static str>) -> Vec<Effect> {
     }
 }
 
-/// The set record, then the notes typed with it as a note record on the same equipment.
+/// The set record, then the answer the tool gives for it (the flow curve by the choice
+/// rule, so the journal holds what was seen as well as what was read), then the notes
+/// typed with it as a note record on the same equipment.
 fn drafts(
     checked: &CheckedSet,
     viscometer: &str,
     product: &str,
     equipment: Option<String>,
+    site: &Site,
 ) -> Vec<Draft> {
     let set = Payload::ViscometerSet {
         viscometer: viscometer.to_string(),
@@ -164,6 +177,14 @@ fn drafts(
         rows: checked.rows.clone(),
     };
     let mut out = vec![draft(set, equipment.clone())];
+    if let Ok(curve) = fit_rows(site, viscometer, &checked.rows) {
+        let temperature_k = checked.temperature.as_ref().map(|t| t.1);
+        let result = Payload::Result {
+            what: format!("flow-curve {}", curve.fit.model.kind().title()),
+            data: curve_json(&curve, &FlowCurveOptions::default(), temperature_k),
+        };
+        out.push(draft(result, equipment.clone()));
+    }
     if let Some(text) = &checked.notes {
         out.push(draft(
             Payload::Note {
