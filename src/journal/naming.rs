@@ -70,7 +70,40 @@ pub fn os_user() -> String {
     ["USER", "LOGNAME"]
         .iter()
         .filter_map(|k| std::env::var(k).ok())
+        .chain(passwd_name())
         .map(|v| super::clean::line(&v))
         .find(|v| !v.is_empty())
         .unwrap_or_else(|| "unknown".to_string())
+}
+
+/// The account name for this process's uid from /etc/passwd: services, cron jobs and
+/// `su` shells often run without USER or LOGNAME set.
+fn passwd_name() -> Option<String> {
+    let uid = rustix::process::getuid().as_raw().to_string();
+    let passwd = std::fs::read_to_string("/etc/passwd").ok()?;
+    user_for_uid(&passwd, &uid)
+}
+
+fn user_for_uid(passwd: &str, uid: &str) -> Option<String> {
+    passwd.lines().find_map(|line| {
+        let mut fields = line.split(':');
+        let name = fields.next()?;
+        let id = fields.nth(1)?;
+        (id == uid && !name.is_empty()).then(|| name.to_string())
+    })
+}
+
+#[cfg(test)]
+mod passwd_tests {
+    use super::user_for_uid;
+
+    #[test]
+    fn finds_the_name_for_a_uid() {
+        // Format from passwd(5): name:password:UID:GID:GECOS:directory:shell.
+        let passwd = "root:x:0:0:root:/root:/bin/bash\nana:x:1001:1001:Ana:/home/ana:/bin/sh\n";
+        assert_eq!(user_for_uid(passwd, "1001").as_deref(), Some("ana"));
+        assert_eq!(user_for_uid(passwd, "0").as_deref(), Some("root"));
+        assert_eq!(user_for_uid(passwd, "42"), None);
+        assert_eq!(user_for_uid("garbage", "0"), None);
+    }
 }
