@@ -28,7 +28,7 @@ impl TerminalGuard {
     pub fn enter() -> io::Result<TerminalGuard> {
         install_panic_hook();
         // crossterm writes a bare `ESC[m` (reset all) for colours under NO_COLOR, which
-        // would cancel reverse video; the theme maps colours to Reset itself instead.
+        // would cancel inverse display; the theme maps colours to Reset itself instead.
         style::force_color_output(true);
         terminal::enable_raw_mode()?;
         if let Err(e) = execute!(io::stdout(), terminal::EnterAlternateScreen, cursor::Hide) {

@@ -1,7 +1,7 @@
 //! The one theme: named styles from the 16 ANSI colours, and the glyphs for borders and marks.
 //!
 //! Without colour (`NO_COLOR`, `TERM=dumb`) every colour becomes `Reset` and emphasis is
-//! carried by modifiers alone, so selection stays visible: it is always reverse video or
+//! carried by modifiers alone, so selection stays visible: it is always inverse display or
 //! bold, never a colour on its own.
 
 use ratatui::style::{Color, Modifier, Style};

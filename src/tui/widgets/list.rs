@@ -1,4 +1,4 @@
-//! A bordered pick list: the cursor in reverse video, picked rows marked `*` and bold, and
+//! A bordered pick list: the cursor in inverse display, picked rows marked `*` and bold, and
 //! scrolled so the cursor stays in view. Row text is cleaned before it is drawn.
 
 use crate::text::sanitize;
