@@ -21,6 +21,19 @@ const PA_PER_DIAL: f64 = 0.511;
 /// A journal of `site_id` started `days_ago` days before `now`, holding one viscometer set
 /// of `product` with consistency index `k` (Pa·sⁿ).
 fn session(dir: &Path, site_id: &str, now: DateTime<Utc>, days_ago: i64, operator: &str, k: f64) {
+    session_at(dir, site_id, now, days_ago, operator, k, 25.0);
+}
+
+/// As [`session`], with the set read at `temp_c` °C.
+fn session_at(
+    dir: &Path,
+    site_id: &str,
+    now: DateTime<Utc>,
+    days_ago: i64,
+    operator: &str,
+    k: f64,
+    temp_c: f64,
+) {
     let start = Stamp {
         utc: now - Duration::days(days_ago),
         offset: FixedOffset::east_opt(3600).unwrap(),
@@ -48,8 +61,8 @@ fn session(dir: &Path, site_id: &str, now: DateTime<Utc>, days_ago: i64, operato
     let set = Payload::ViscometerSet {
         viscometer: "VIS-A".into(),
         product: "chilli-sauce".into(),
-        temperature_raw: Some("25 C".into()),
-        temperature_k: Some(298.15),
+        temperature_raw: Some(format!("{temp_c} C")),
+        temperature_k: Some(temp_c + 273.15),
         rows,
     };
     w.append(
@@ -276,4 +289,65 @@ fn simpler_models_are_read_as_herschel_bulkley() {
         check_limits(&[k_max], &casson)[0].status,
         LimitStatus::NotChecked
     );
+}
+
+/// The number before "Pa·sⁿ" on a table row (the K column).
+fn k_on(row: &str) -> f64 {
+    let end = row.find(" Pa·sⁿ").expect("a K value on the row");
+    let start = row[..end].rfind(' ').map_or(0, |i| i + 1);
+    row[start..end]
+        .trim_start_matches(['*', '!'])
+        .parse()
+        .expect("K parses")
+}
+
+#[test]
+fn a_set_read_warm_is_shifted_to_the_reference_temperature() {
+    // The demo's chilli sauce: reference 25 °C, activation energy 30 kJ/mol (invented).
+    // Arrhenius (REFERENCE.md §4), worked by hand for 45 °C: (30000/8.314462618) = 3608.171 K,
+    // 1/318.15 − 1/298.15 = −2.108445e-4, product −0.760762, so K(45 °C) = K(25 °C)·0.467308.
+    let dir = tempfile::tempdir().unwrap();
+    let now = Utc::now();
+    let factor = ((30_000.0_f64 / 8.314462618) * (1.0 / 318.15 - 1.0 / 298.15)).exp();
+    assert!(
+        (factor - 0.467308).abs() < 1e-6,
+        "hand-worked factor {factor}"
+    );
+    session_at(
+        dir.path(),
+        "marrowdale-u4",
+        now,
+        5,
+        "J. Ferreira",
+        14.0,
+        25.0,
+    );
+    session_at(
+        dir.path(),
+        "marrowdale-u4",
+        now,
+        3,
+        "T. Oduya",
+        14.0 * factor,
+        45.0,
+    );
+    let out = text(&trend(
+        dir.path(),
+        &[
+            "--site",
+            "site-configs/demo.toml",
+            "--product",
+            "chilli-sauce",
+        ],
+    ));
+    let table = rows(&out);
+    assert_eq!(table.len(), 2, "{out}");
+    let (cool, warm) = (k_on(table[0]), k_on(table[1]));
+    // Shifted back, the warm set's K is the cool one's (dials are rounded to 0.1: 2 %).
+    assert!((warm - cool).abs() / cool < 0.02, "{cool} vs {warm}\n{out}");
+    assert!(
+        (cool - expected_k(14.0)).abs() / expected_k(14.0) < 0.02,
+        "{out}"
+    );
+    assert!(out.contains("shifted to 25.0 °C"), "{out}");
 }

@@ -5,8 +5,8 @@ use super::flow_curve::{
     FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, analyse,
 };
 use crate::instrument::DialReading;
-use crate::rheology::temperature::{ActivationFit, fit_activation_energy};
-use crate::rheology::{FitError, ModelKind, ParamName, Point};
+use crate::rheology::temperature::{ActivationFit, fit_activation_energy, shift_to_reference};
+use crate::rheology::{FitError, Model, ModelKind, ParamName, Point};
 
 /// Readings closer than this are taken as the same temperature (a thermometer's resolution).
 pub const SAME_TEMPERATURE_K: f64 = 0.05;
@@ -177,5 +177,54 @@ mod tests {
         assert_eq!(groups.len(), 2);
         assert_eq!(groups[0].1, vec![0, 1, 3]);
         assert_eq!(groups[1].1, vec![2]);
+    }
+}
+
+/// The model with its viscosity parameter (K, μ, μp or μc) brought from the temperature it
+/// was read at to `t_ref_k` by Arrhenius, so sets read warm and cold compare against the
+/// same spec limits. τ0 and n are left as measured: REFERENCE.md §4 takes n as independent
+/// of temperature, and the yield stress has no general temperature law.
+pub fn shift_model_to_reference(model: &Model, ea_j_per_mol: f64, t_k: f64, t_ref_k: f64) -> Model {
+    let to_ref = |v: f64| shift_to_reference(v, ea_j_per_mol, t_k, t_ref_k);
+    match *model {
+        Model::Newtonian { mu } => Model::Newtonian { mu: to_ref(mu) },
+        Model::PowerLaw { k, n } => Model::PowerLaw { k: to_ref(k), n },
+        Model::Bingham { tau0, mu_p } => Model::Bingham {
+            tau0,
+            mu_p: to_ref(mu_p),
+        },
+        Model::HerschelBulkley { tau0, k, n } => Model::HerschelBulkley {
+            tau0,
+            k: to_ref(k),
+            n,
+        },
+        Model::Casson { tau0, mu_c } => Model::Casson {
+            tau0,
+            mu_c: to_ref(mu_c),
+        },
+    }
+}
+
+#[cfg(test)]
+mod shift_tests {
+    use super::*;
+
+    #[test]
+    fn shifts_only_the_viscosity_parameter() {
+        // Arrhenius, REFERENCE.md §4, worked by hand: Ea = 40 kJ/mol, read at 40 °C, reference
+        // 20 °C: (40000/8.314462618)(1/313.15 − 1/293.15) = 4810.894·(−2.178651e-4) = −1.048126,
+        // so K(40 °C)/K(20 °C) = exp(−1.048126) = 0.3505942 and K_ref = 2/0.3505942 = 5.704602.
+        let read = Model::HerschelBulkley {
+            tau0: 3.0,
+            k: 2.0,
+            n: 0.5,
+        };
+        let Model::HerschelBulkley { tau0, k, n } =
+            shift_model_to_reference(&read, 40_000.0, 313.15, 293.15)
+        else {
+            panic!("model kind changed");
+        };
+        assert_eq!((tau0, n), (3.0, 0.5));
+        assert!((k - 5.704602).abs() < 1e-5, "K at reference {k}");
     }
 }

@@ -2,9 +2,12 @@
 //!
 //! Pure: the caller reads the files and the clock (`now` is passed in). Each session
 //! contributes its last viscometer set of the product inside the window, fitted through
-//! the same [`super::state::fit_rows`] the report and the TUI use.
+//! the same [`super::state::fit_rows`] the report and the TUI use. When the set's
+//! temperature and the product's activation energy are known, the viscosity parameter is
+//! shifted to the product's reference temperature before the limits are checked.
 
 use super::state::{Moment, fit_rows};
+use super::temperature::shift_model_to_reference;
 use crate::journal::{Payload, Record};
 use crate::rheology::{Model, ParamName};
 use crate::site::{LimitProperty, Product, Site, SpecLimit};
@@ -194,6 +197,9 @@ pub struct SessionPoint {
     /// Sets of this product in the window in this session (the last is shown).
     pub sets: usize,
     pub temperature_k: Option<f64>,
+    /// The reference temperature K, μ, μp or μc were shifted to (Arrhenius, the product's
+    /// activation energy); `None` when they are as measured.
+    pub shifted_to_k: Option<f64>,
     /// The constants, or why the set could not be fitted.
     pub outcome: Result<Constants, String>,
 }
@@ -271,8 +277,17 @@ impl<'a> TrendBuilder<'a> {
         else {
             return None;
         };
+        let shift = self.reference_shift(*temperature_k);
         let outcome = fit_rows(self.site, viscometer, rows)
-            .map(|curve| self.constants(&curve.fit.model))
+            .map(|curve| {
+                let model = match shift {
+                    Some((ea, t_k, t_ref_k)) => {
+                        shift_model_to_reference(&curve.fit.model, ea, t_k, t_ref_k)
+                    }
+                    None => curve.fit.model,
+                };
+                self.constants(&model)
+            })
             .map_err(|e| e.to_string());
         Some(SessionPoint {
             session: record.session.clone(),
@@ -284,8 +299,17 @@ impl<'a> TrendBuilder<'a> {
             set_seq: record.seq,
             sets: count,
             temperature_k: *temperature_k,
+            shifted_to_k: shift.map(|(_, _, t_ref_k)| t_ref_k),
             outcome,
         })
+    }
+
+    /// (Ea, T read, T reference) when the set's temperature and the product's activation
+    /// energy are both known; otherwise the constants stay as measured.
+    fn reference_shift(&self, temperature_k: Option<f64>) -> Option<(f64, f64, f64)> {
+        let ea = self.product.activation_energy_j_mol?;
+        let t_k = temperature_k.filter(|t| t.is_finite() && *t > 0.0)?;
+        Some((ea, t_k, self.product.reference_temperature_k))
     }
 
     fn is_our_set(&self, r: &Record) -> bool {

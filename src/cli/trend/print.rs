@@ -53,10 +53,30 @@ pub fn table(trend: &Trend, system: UnitSystem) -> String {
         out.push_str(&row(p, system));
     }
     out.push_str("\n* fixed by the model's form (e.g. n = 1 for Bingham), not fitted.\n");
-    out.push_str(
-        "Each row is the session's last set of this product in the window, as measured:\n\
-         at the set's temperature, not shifted to the reference temperature.\n",
-    );
+    out.push_str(&temperature_legend(trend, system));
+    out
+}
+
+/// Say which rows were brought to the reference temperature and which are as measured.
+fn temperature_legend(trend: &Trend, system: UnitSystem) -> String {
+    let shifted: Vec<f64> = trend.points.iter().filter_map(|p| p.shifted_to_k).collect();
+    let mut out = String::from("Each row is the session's last set of this product in the window");
+    match shifted.first() {
+        Some(t_ref) if shifted.len() == trend.points.len() => out.push_str(&format!(
+            ";\nK (or the viscosity) and μa shifted to {} by the product's activation energy,\n\
+             τ0 and n as measured.\n",
+            crate::units::format(*t_ref, crate::units::Dimension::Temperature, system)
+        )),
+        Some(t_ref) => out.push_str(&format!(
+            ";\nrows with a temperature are shifted to {} by the product's activation energy\n\
+             (K or the viscosity, and μa); rows without one are as measured.\n",
+            crate::units::format(*t_ref, crate::units::Dimension::Temperature, system)
+        )),
+        None => out.push_str(
+            ", as measured:\nat the set's temperature, not shifted (no temperature or no\n\
+             activation energy for the product in the site config).\n",
+        ),
+    }
     out
 }
 
