@@ -168,6 +168,24 @@ fn check_one(limit: SpecLimit, model: &Model) -> LimitCheck {
     }
 }
 
+/// The model as it would read at the product's reference temperature, and that
+/// temperature, when the set's temperature and the product's activation energy are both
+/// known; otherwise the model as measured and `None`. Spec limits are stated at the
+/// reference temperature, so limits are checked on this.
+pub fn at_reference(
+    product: &Product,
+    model: &Model,
+    temperature_k: Option<f64>,
+) -> (Model, Option<f64>) {
+    let t_ref = product.reference_temperature_k;
+    match (product.activation_energy_j_mol, temperature_k) {
+        (Some(ea), Some(t)) if t.is_finite() && t > 0.0 => {
+            (shift_model_to_reference(model, ea, t, t_ref), Some(t_ref))
+        }
+        _ => (*model, None),
+    }
+}
+
 /// The constants of one fitted set.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Constants {
@@ -277,15 +295,11 @@ impl<'a> TrendBuilder<'a> {
         else {
             return None;
         };
-        let shift = self.reference_shift(*temperature_k);
+        let mut shifted_to_k = None;
         let outcome = fit_rows(self.site, viscometer, rows)
             .map(|curve| {
-                let model = match shift {
-                    Some((ea, t_k, t_ref_k)) => {
-                        shift_model_to_reference(&curve.fit.model, ea, t_k, t_ref_k)
-                    }
-                    None => curve.fit.model,
-                };
+                let (model, to) = at_reference(self.product, &curve.fit.model, *temperature_k);
+                shifted_to_k = to;
                 self.constants(&model)
             })
             .map_err(|e| e.to_string());
@@ -299,17 +313,9 @@ impl<'a> TrendBuilder<'a> {
             set_seq: record.seq,
             sets: count,
             temperature_k: *temperature_k,
-            shifted_to_k: shift.map(|(_, _, t_ref_k)| t_ref_k),
+            shifted_to_k,
             outcome,
         })
-    }
-
-    /// (Ea, T read, T reference) when the set's temperature and the product's activation
-    /// energy are both known; otherwise the constants stay as measured.
-    fn reference_shift(&self, temperature_k: Option<f64>) -> Option<(f64, f64, f64)> {
-        let ea = self.product.activation_energy_j_mol?;
-        let t_k = temperature_k.filter(|t| t.is_finite() && *t > 0.0)?;
-        Some((ea, t_k, self.product.reference_temperature_k))
     }
 
     fn is_our_set(&self, r: &Record) -> bool {

@@ -6,7 +6,7 @@ use super::{CAUTIONS, Inputs, Journal, dimension_of, problems, rfc3339};
 use crate::cli::fit_output;
 use crate::session::FlowCurveOptions;
 use crate::session::state::{Entry, Moment, SessionState, ViscometerSet};
-use crate::session::trend::{LimitStatus, check_limits, spec_rate};
+use crate::session::trend::{LimitStatus, at_reference, check_limits, spec_rate};
 use crate::site::{LimitProperty, Site};
 use serde_json::{Map, Value, json};
 
@@ -96,10 +96,12 @@ fn set(site: &Site, e: &Entry<ViscometerSet>, s: &SessionState) -> Value {
     let product = site.product(&v.product);
     let rate = product.map_or(crate::session::trend::DEFAULT_RATE_PER_S, spec_rate);
     let limits: Vec<Value> = match (product, curve) {
-        (Some(p), Some(c)) => check_limits(&p.limits, &c.fit.model)
-            .iter()
-            .map(limit)
-            .collect(),
+        (Some(p), Some(c)) => {
+            check_limits(&p.limits, &at_reference(p, &c.fit.model, v.temperature_k).0)
+                .iter()
+                .map(limit)
+                .collect()
+        }
         _ => Vec::new(),
     };
     let seen: Vec<Value> = seen_for(e.seq, &s.sets, &s.results)

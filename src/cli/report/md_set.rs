@@ -8,7 +8,7 @@ use crate::cli::trend::text::{check_text, describe_limit, rate_text, value_text}
 use crate::rheology::{Estimate, Fit};
 use crate::session::FlowCurve;
 use crate::session::state::{Entry, SessionState, ViscometerSet};
-use crate::session::trend::{LimitStatus, check_limits, spec_rate};
+use crate::session::trend::{LimitStatus, at_reference, check_limits, spec_rate};
 use crate::site::Site;
 use crate::units::{self, Dimension, UnitSystem};
 use std::fmt::Write as _;
@@ -81,7 +81,7 @@ fn curve_text(site: &Site, set: &ViscometerSet, curve: &FlowCurve) -> String {
         let _ = writeln!(out, "- Warning: {}", cell(w));
     }
     match product {
-        Some(p) => out.push_str(&limits(p, fit, system)),
+        Some(p) => out.push_str(&limits(p, fit, set.temperature_k, system)),
         None => {
             let _ = writeln!(
                 out,
@@ -125,15 +125,25 @@ fn quality(fit: &Fit, system: UnitSystem) -> String {
     )
 }
 
-fn limits(product: &crate::site::Product, fit: &Fit, system: UnitSystem) -> String {
-    let mut out = format!(
-        "\nSpec limits of {} (checked as measured, at the set's temperature):\n\n",
-        product.name
-    );
+fn limits(
+    product: &crate::site::Product,
+    fit: &Fit,
+    temperature_k: Option<f64>,
+    system: UnitSystem,
+) -> String {
+    let (model, shifted_to) = at_reference(product, &fit.model, temperature_k);
+    let basis = match shifted_to {
+        Some(t) => format!(
+            "K or the viscosity shifted to {} by the product's activation energy",
+            units::format(t, Dimension::Temperature, system)
+        ),
+        None => "checked as measured, at the set's temperature".to_string(),
+    };
+    let mut out = format!("\nSpec limits of {} ({basis}):\n\n", product.name);
     if product.limits.is_empty() {
         out.push_str("- none set in the site config\n");
     }
-    for c in check_limits(&product.limits, &fit.model) {
+    for c in check_limits(&product.limits, &model) {
         let verdict = match c.status {
             LimitStatus::Above | LimitStatus::Below => {
                 format!("**OUT**: {}", check_text(&c, system))
