@@ -64,36 +64,28 @@ impl App {
             ss::RECORDS,
             ss::RESUMED_TAIL
         );
-        let last = records
-            .iter()
-            .rev()
-            .find(|r| matches!(r.payload, Payload::ViscometerSet { .. }));
-        let Some(record) = last else { return };
-        let Payload::ViscometerSet {
-            viscometer,
-            product,
-            temperature_raw,
-            rows,
-            ..
-        } = &record.payload
-        else {
+        // The same replay the handover report uses, so both see the same last set.
+        let state = crate::session::SessionState::replay(&self.ctx.site, records);
+        let Some(last) = state.sets.last() else {
             return;
         };
-        let Some(v) = self.ctx.site.viscometer(viscometer) else {
+        let item = &last.item;
+        let Some(v) = self.ctx.site.viscometer(&item.viscometer) else {
             return;
         };
-        let readings = rows
+        let readings = item
+            .rows
             .iter()
             .map(|r| crate::instrument::DialReading::new(r.rpm, r.dial));
         let set = Arc::new(SavedSet {
-            viscometer: viscometer.clone(),
+            viscometer: item.viscometer.clone(),
             geometry: v.geometry.clone(),
-            product: product.clone(),
-            temperature_text: temperature_raw.clone(),
+            product: item.product.clone(),
+            temperature_text: item.temperature_raw.clone(),
             readings: readings.collect(),
         });
-        self.ctx.picks.product = Some(product.clone());
-        self.ctx.picks.equipment = record.equipment.clone();
+        self.ctx.picks.product = Some(item.product.clone());
+        self.ctx.picks.equipment = last.equipment.clone();
         self.broadcast(&SessionEvent::SetSaved { set, ticket: None });
         self.apply(vec![Effect::Show(ViewId::Curve)]);
     }
