@@ -3,19 +3,21 @@
 //! full redraw at 200×60, and process start to first frame in a pseudo-terminal.
 //! Run with `cargo bench --bench tui`. Readings are invented (an HB-like sauce).
 
-use chrono::DateTime;
+#[path = "../tests/support/tui.rs"]
+mod support;
+
 use divan::{Bencher, black_box};
-use portable_pty::{CommandBuilder, PtySize, native_pty_system};
+use portable_pty::CommandBuilder;
 use ratatui::backend::{CrosstermBackend, TestBackend};
 use ratatui::crossterm::event::{KeyCode, KeyEvent};
 use ratatui::layout::Rect;
 use ratatui::{Terminal, TerminalOptions, Viewport};
 use rheoside::tui::app::App;
-use rheoside::tui::theme::{ColourMode, Glyphs, Theme};
-use rheoside::tui::{render, startup};
-use std::io::{self, Read, Write};
+use rheoside::tui::render;
+use rheoside::tui::theme::{ColourMode, Glyphs};
+use std::io::Read;
 use std::num::NonZeroU16;
-use std::sync::atomic::{AtomicUsize, Ordering};
+use std::sync::atomic::Ordering;
 use std::sync::{Arc, Mutex};
 use std::time::{Duration, Instant};
 
@@ -28,10 +30,12 @@ fn main() {
 }
 
 fn app() -> App {
-    let site = rheoside::site::demo().expect("the demo site loads");
-    let theme = Theme::new(ColourMode::Colour, Glyphs::Unicode);
-    let now = DateTime::parse_from_rfc3339("2026-12-01T08:00:00+01:00").expect("a valid time");
-    startup::app_for(site, "bench", theme, now, "logs/bench.jsonl")
+    support::demo_app(
+        ColourMode::Colour,
+        Glyphs::Unicode,
+        "bench",
+        "logs/bench.jsonl",
+    )
 }
 
 fn keys(app: &mut App, text: &str) {
@@ -91,23 +95,10 @@ fn typed_digit_80x24(bencher: Bencher) {
     });
 }
 
-#[derive(Clone, Default)]
-struct Counter(Arc<AtomicUsize>);
-
-impl Write for Counter {
-    fn write(&mut self, buf: &[u8]) -> io::Result<usize> {
-        self.0.fetch_add(buf.len(), Ordering::Relaxed);
-        Ok(buf.len())
-    }
-    fn flush(&mut self) -> io::Result<()> {
-        Ok(())
-    }
-}
-
 /// Bytes the crossterm backend writes for the frame after one more digit.
 fn digit_bytes() -> usize {
     let mut a = typing_app();
-    let counter = Counter::default();
+    let counter = support::Counter::default();
     let options = TerminalOptions {
         viewport: Viewport::Fixed(Rect::new(0, 0, 80, 24)),
     };
@@ -142,14 +133,7 @@ impl Drop for Started {
 fn process_start_to_first_frame(bencher: Bencher) {
     bencher.bench_local(|| {
         let logs = tempfile::tempdir().expect("a temp dir");
-        let pty = native_pty_system()
-            .openpty(PtySize {
-                rows: 24,
-                cols: 80,
-                pixel_width: 0,
-                pixel_height: 0,
-            })
-            .expect("a pty");
+        let pty = support::pty_80x24();
         let mut cmd = CommandBuilder::new(env!("CARGO_BIN_EXE_rheoside"));
         cmd.args(["--log-dir", logs.path().to_str().expect("a UTF-8 path")]);
         cmd.env("TERM", "xterm-256color");

@@ -3,7 +3,10 @@
 //! then the journal file checked. Also: SIGTERM flushes and restores, a bad site config
 //! stops before the screen is touched, and a pipe gets a hint instead of a screen.
 
-use portable_pty::{Child, CommandBuilder, PtySize, native_pty_system};
+#[path = "support/tui.rs"]
+mod support;
+
+use portable_pty::{Child, CommandBuilder};
 use rheoside::instrument::{DialReading, Geometry};
 use rheoside::journal::{Payload, load};
 use rheoside::rheology::ParamName;
@@ -28,14 +31,7 @@ struct Session {
 
 impl Session {
     fn start(args: &[&str]) -> Session {
-        let pty = native_pty_system()
-            .openpty(PtySize {
-                rows: 24,
-                cols: 80,
-                pixel_width: 0,
-                pixel_height: 0,
-            })
-            .expect("a pty");
+        let pty = support::pty_80x24();
         let mut cmd = CommandBuilder::new(assert_cmd::cargo::cargo_bin("rheoside"));
         cmd.args(args);
         cmd.env("TERM", "xterm-256color");

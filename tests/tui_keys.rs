@@ -2,7 +2,9 @@
 //! terminal): presses only, asking before losing input, Ctrl-C, the ways out of every
 //! screen, and a viscometer set going from keys to a journal record and a fitted curve.
 
-use chrono::DateTime;
+#[path = "support/tui.rs"]
+mod support;
+
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
 use ratatui::crossterm::event::{KeyCode, KeyEvent, KeyEventKind, KeyModifiers};
@@ -12,16 +14,13 @@ use rheoside::session::{FlowCurveInput, FlowCurveOptions, analyse};
 use rheoside::tui::app::{App, RunState};
 use rheoside::tui::keymap::{BINDINGS, Context};
 use rheoside::tui::overlay::Overlay;
+use rheoside::tui::render;
 use rheoside::tui::theme::{ColourMode, Glyphs, Theme};
 use rheoside::tui::views::ViewId;
 use rheoside::tui::writer::Reply;
-use rheoside::tui::{render, startup};
 
 fn app() -> App {
-    let site = rheoside::site::demo().expect("the demo site loads");
-    let theme = Theme::new(ColourMode::Plain, Glyphs::Unicode);
-    let now = DateTime::parse_from_rfc3339("2026-12-01T08:00:00+01:00").expect("a valid time");
-    startup::app_for(site, "ana", theme, now, "logs/test.jsonl")
+    support::demo_app(ColourMode::Plain, Glyphs::Unicode, "ana", "logs/test.jsonl")
 }
 
 fn event(code: KeyCode, modifiers: KeyModifiers, kind: KeyEventKind) -> KeyEvent {
@@ -52,15 +51,7 @@ fn screen(app: &App) -> String {
     let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");
     t.draw(|f| render::draw(app, f))
         .expect("drawing into memory");
-    let buf = t.backend().buffer();
-    (0..buf.area.height)
-        .map(|y| {
-            (0..buf.area.width)
-                .map(|x| buf[(x, y)].symbol())
-                .collect::<String>()
-        })
-        .collect::<Vec<_>>()
-        .join("\n")
+    support::screen_text(t.backend().buffer())
 }
 
 /// Pick the first sample point (a tank, which also picks its product), go to Readings.

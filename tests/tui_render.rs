@@ -2,7 +2,9 @@
 //! 80×24, the "too small" screen at 20×5, overlays that must stay inside tiny frames,
 //! NO_COLOR and ASCII modes, resizing, and the bytes one typed digit costs on the wire.
 
-use chrono::DateTime;
+#[path = "support/tui.rs"]
+mod support;
+
 use ratatui::Terminal;
 use ratatui::backend::{CrosstermBackend, TestBackend};
 use ratatui::buffer::Buffer;
@@ -11,23 +13,13 @@ use ratatui::layout::Rect;
 use ratatui::style::{Color, Modifier};
 use ratatui::{TerminalOptions, Viewport};
 use rheoside::tui::app::App;
-use rheoside::tui::theme::{ColourMode, Glyphs, Theme};
+use rheoside::tui::render;
+use rheoside::tui::theme::{ColourMode, Glyphs};
 use rheoside::tui::writer::Reply;
-use rheoside::tui::{render, startup};
-use std::io::{self, Write};
-use std::sync::Arc;
-use std::sync::atomic::{AtomicUsize, Ordering};
+use std::sync::atomic::Ordering;
 
 fn app_with(mode: ColourMode, glyphs: Glyphs) -> App {
-    let site = rheoside::site::demo().expect("the demo site loads");
-    let now = DateTime::parse_from_rfc3339("2026-12-01T08:00:00+01:00").expect("a valid time");
-    startup::app_for(
-        site,
-        "ana",
-        Theme::new(mode, glyphs),
-        now,
-        "logs/test.jsonl",
-    )
+    support::demo_app(mode, glyphs, "ana", "logs/test.jsonl")
 }
 
 fn app() -> App {
@@ -54,14 +46,7 @@ fn draw(app: &App, w: u16, h: u16) -> Buffer {
 }
 
 fn lines(buf: &Buffer) -> String {
-    (0..buf.area.height)
-        .map(|y| {
-            (0..buf.area.width)
-                .map(|x| buf[(x, y)].symbol())
-                .collect::<String>()
-        })
-        .collect::<Vec<_>>()
-        .join("\n")
+    support::screen_text(buf)
 }
 
 /// Picks, six invented readings of an HB-like sauce, 45 C, saved.
@@ -241,26 +226,12 @@ fn resizing_redraws_cleanly() {
     assert_eq!(*t.backend().buffer(), draw(&a, 80, 24));
 }
 
-/// Counts what the app sends to the terminal.
-#[derive(Clone, Default)]
-struct Counter(Arc<AtomicUsize>);
-
-impl Write for Counter {
-    fn write(&mut self, buf: &[u8]) -> io::Result<usize> {
-        self.0.fetch_add(buf.len(), Ordering::Relaxed);
-        Ok(buf.len())
-    }
-    fn flush(&mut self) -> io::Result<()> {
-        Ok(())
-    }
-}
-
 #[test]
 fn typing_a_digit_sends_at_most_64_bytes() {
     let mut a = app_with(ColourMode::Colour, Glyphs::Unicode);
     keys(&mut a, &[KeyCode::Enter, KeyCode::Enter, KeyCode::Tab]);
     text(&mut a, "5");
-    let counter = Counter::default();
+    let counter = support::Counter::default();
     let options = TerminalOptions {
         viewport: Viewport::Fixed(Rect::new(0, 0, 80, 24)),
     };
