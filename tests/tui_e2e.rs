@@ -3,8 +3,7 @@
 //! then the journal file checked. Also: SIGTERM flushes and restores, a bad site config
 //! stops before the screen is touched, and a pipe gets a hint instead of a screen.
 
-#[path = "support/tui.rs"]
-mod support;
+use crate::support;
 
 use portable_pty::{Child, CommandBuilder};
 use rheoside::instrument::{DialReading, Geometry};

@@ -2,8 +2,7 @@
 //! terminal): presses only, asking before losing input, Ctrl-C, the ways out of every
 //! screen, and a viscometer set going from keys to a journal record and a fitted curve.
 
-#[path = "support/tui.rs"]
-mod support;
+use crate::support;
 
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;

@@ -2,8 +2,7 @@
 //! 80×24, the "too small" screen at 20×5, overlays that must stay inside tiny frames,
 //! NO_COLOR and ASCII modes, resizing, and the bytes one typed digit costs on the wire.
 
-#[path = "support/tui.rs"]
-mod support;
+use crate::support;
 
 use ratatui::Terminal;
 use ratatui::backend::{CrosstermBackend, TestBackend};

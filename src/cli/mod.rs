@@ -8,6 +8,7 @@ mod fit_csv;
 mod fit_output;
 mod record;
 mod report;
+pub mod rheology_args;
 mod trend;
 
 pub use args::{Cli, Command};

@@ -1,0 +1,22 @@
+//! The whole integration suite as one test binary, so the crate is linked once for it.
+//! Each file beside this one is a module; `cargo test --test all NAME` runs one of them.
+
+#[path = "support/tui.rs"]
+mod support;
+
+mod cli_fit;
+mod instrument;
+mod journal;
+mod journal_crash;
+mod report;
+mod rheology;
+mod rheology_choice;
+mod rheology_errors;
+mod rheology_props;
+mod rheology_temperature;
+mod site;
+mod trend;
+mod tui_e2e;
+mod tui_keys;
+mod tui_render;
+mod units;
