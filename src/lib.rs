@@ -17,6 +17,8 @@ pub mod journal;
 
 pub mod session;
 
+pub mod present;
+
 pub mod cli;
 
 pub mod tui;

@@ -1,5 +1,35 @@
-//! The `rheoside` binary: parses the command line and hands over to a face.
+//! The `rheoside` binary: parses the command line and hands the work to one face — the
+//! screens when no subcommand is given, else the subcommand. The two faces never call each
+//! other.
 
-fn main() -> std::process::ExitCode {
-    rheoside::cli::main()
+use clap::Parser;
+use rheoside::cli::{Cli, EXIT_BAD_INPUT};
+use rheoside::tui::TuiOptions;
+use std::process::ExitCode;
+
+fn main() -> ExitCode {
+    let cli = Cli::parse();
+    let outcome = match &cli.command {
+        None => rheoside::tui::run(&screen_options(&cli)),
+        Some(command) => rheoside::cli::run(&cli, command),
+    };
+    match outcome {
+        Ok(code) => code,
+        Err(err) => {
+            // Best effort: after a terminal hang-up stderr may be gone, and eprintln! panics.
+            use std::io::Write as _;
+            let _ = writeln!(std::io::stderr(), "rheoside: {err:#}");
+            ExitCode::from(EXIT_BAD_INPUT)
+        }
+    }
+}
+
+fn screen_options(cli: &Cli) -> TuiOptions {
+    TuiOptions {
+        site: cli.site.clone(),
+        resume: cli.resume.clone(),
+        log_dir: cli.log_dir.clone(),
+        operator: cli.operator.clone(),
+        ascii: cli.ascii,
+    }
 }

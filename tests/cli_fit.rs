@@ -221,7 +221,7 @@ fn human_output_names_the_model_and_why() {
     let text = String::from_utf8(out).unwrap();
     assert!(text.contains("Flow curve: Newtonian"), "{text}");
     assert!(text.contains("why:"), "{text}");
-    assert!(text.contains("95 % confidence interval"), "{text}");
+    assert!(text.contains("± 95 % interval"), "{text}");
 }
 
 #[test]

@@ -83,6 +83,8 @@ fn awkward_floats_and_every_envelope_field_round_trip_exactly() {
             equipment: (i % 2 == 0).then(|| "T-3".to_string()),
             payload: Payload::Result {
                 what: "fit".into(),
+                result_kind: None,
+                from: Vec::new(),
                 data: serde_json::json!({ "k": v }),
             },
             version: "9.9.9".into(),
@@ -395,7 +397,12 @@ mod replay {
                     temperature_k: t.map(|t| t.1),
                     rows,
                 }),
-            (text(), value()).prop_map(|(what, data)| Payload::Result { what, data }),
+            (text(), value()).prop_map(|(what, data)| Payload::Result {
+                what,
+                result_kind: None,
+                from: Vec::new(),
+                data,
+            }),
             text().prop_map(|text| Payload::Note { text }),
             (severity, text()).prop_map(|(severity, text)| Payload::Finding { severity, text }),
             Just(Payload::SessionEnd),

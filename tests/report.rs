@@ -79,6 +79,8 @@ fn known_journal(dir: &Path) -> PathBuf {
         None,
         Payload::Result {
             what: "flow-curve".into(),
+            result_kind: None,
+            from: Vec::new(),
             data: seen,
         },
     )
@@ -159,8 +161,8 @@ fn markdown_has_every_section_and_the_cautions() {
     // A Newtonian fluid on the standard viscometer reads μ (mPa·s) = θ300 (API glossary via
     // REFERENCE.md §2): θ300 = 30, so 30 mPa·s.
     assert!(md.contains("**Newtonian**"), "{md}");
-    assert!(md.contains("| μ viscosity | 30.0 mPa.s |"), "{md}");
-    assert!(md.contains("95 % confidence interval"), "{md}");
+    assert!(md.contains("| μ viscosity | 30.0"), "{md}");
+    assert!(md.contains("value ± 95 % interval"), "{md}");
     // The saved result claimed a power law: the report says it differs.
     assert!(md.contains("Seen at the time (record 5"), "{md}");
     assert!(md.contains("**differs** from the recomputed fit"), "{md}");
@@ -280,6 +282,7 @@ fn json_keeps_its_documented_keys() {
         keys(&s["sets"][0]),
         [
             "apparent_viscosity",
+            "chosen_by_hand",
             "equipment",
             "fit",
             "fit_error",

@@ -32,16 +32,21 @@ fn scipy_ci(refs: &Value, dataset: &str, model: &str, param: &str) -> (f64, f64)
     (ci[0].as_f64().unwrap(), ci[1].as_f64().unwrap())
 }
 
+/// The reason the rule gives, worded by the presentation layer in SI.
+fn why(c: &rheoside::rheology::Choice) -> String {
+    rheoside::present::reason::explain(c, rheoside::present::Style::SI)
+}
+
 #[test]
 fn newtonian_data_picks_newtonian() {
     let refs = refs();
     for weighting in [Weighting::Unweighted, Weighting::Relative] {
         let c = choose(&points(&refs, "s1-syrup"), &FitOptions { weighting }).unwrap();
-        assert_eq!(c.best.model.kind(), ModelKind::Newtonian, "{}", c.reason);
+        assert_eq!(c.best.model.kind(), ModelKind::Newtonian, "{}", why(&c));
         assert!(
-            c.reason.starts_with("Newtonian: lowest AICc ("),
+            why(&c).starts_with("Newtonian: lowest AICc ("),
             "{}",
-            c.reason
+            why(&c)
         );
     }
 }
@@ -55,9 +60,10 @@ fn clear_yield_stress_picks_herschel_bulkley() {
     assert_eq!(c.best.model.kind(), ModelKind::HerschelBulkley);
     assert_eq!(c.lowest_aicc, None);
     assert_eq!(
-        c.reason,
+        why(&c),
         "Herschel–Bulkley: lowest AICc (25.0 vs 53.3 for power law); yield stress 91.7 Pa, \
-         95 % CI 80.7–103 Pa, clearly above zero; n 0.398, 95 % CI 0.371–0.425, clearly below 1."
+         95 % interval 80.7 to 103 Pa, clearly above zero; n 0.398, 95 % interval 0.371 to \
+         0.425, clearly below 1."
     );
     assert_eq!(c.candidates.len(), 5);
     assert!(c.candidates.iter().all(|k| k.outcome.is_ok()));
@@ -72,10 +78,10 @@ fn power_law_data_picks_power_law_although_hb_fits_it() {
     assert_eq!(c.best.model.kind(), ModelKind::PowerLaw);
     assert_eq!(c.lowest_aicc, Some(ModelKind::HerschelBulkley));
     assert_eq!(
-        c.reason,
-        "Power law: Herschel–Bulkley had the lowest AICc (−7.9 vs −7.4 for power law), but the \
-         Herschel–Bulkley yield stress (95 % CI −0.0444 to 1.82 Pa) includes zero, so the simpler \
-         power law model is used."
+        why(&c),
+        "Power law: Herschel–Bulkley had the lowest AICc (-7.9 vs -7.4 for power law), but the \
+         Herschel–Bulkley yield stress (95 % interval -0.0444 to 1.82 Pa) includes zero, so the \
+         simpler power law model is used."
     );
 }
 
@@ -95,8 +101,7 @@ fn yield_stress_at_its_bound_loses_to_the_power_law() {
         "scipy also puts τ0 < 0 here (fit_refs.json)"
     );
     assert!(
-        c.reason
-            .starts_with("Power law: lowest AICc (−4.4 vs 0.4 for Herschel–Bulkley); n 0.547")
+        why(&c).starts_with("Power law: lowest AICc (-4.4 vs 0.4 for Herschel–Bulkley); n 0.547")
     );
 }
 
@@ -109,9 +114,9 @@ fn hb_with_n_near_one_steps_down_to_bingham() {
     assert_eq!(c.best.model.kind(), ModelKind::Bingham);
     assert_eq!(c.lowest_aicc, Some(ModelKind::HerschelBulkley));
     assert!(
-        c.reason.ends_with("but the Herschel–Bulkley n (95 % CI 0.997–1.072) includes 1, so the simpler Bingham model is used."),
+        why(&c).ends_with("but the Herschel–Bulkley n (95 % interval 0.997 to 1.072) includes 1, so the simpler Bingham model is used."),
         "{}",
-        c.reason
+        why(&c)
     );
 }
 
@@ -134,11 +139,11 @@ fn candidates_that_cannot_be_compared_are_listed_with_the_reason() {
          (readings − parameters − 1 must be above zero); got 4"
     );
     assert!(
-        c.reason.ends_with(
+        why(&c).ends_with(
             " Not compared: Herschel–Bulkley (needs at least 5 readings for AICc, got 4)."
         ),
         "{}",
-        c.reason
+        why(&c)
     );
     assert_eq!(c.candidates.len(), 5);
 }

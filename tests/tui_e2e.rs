@@ -166,8 +166,10 @@ fn enter_the_set(s: &mut Session) -> String {
     }
     s.wait_for("0.314 rad/s");
     s.send("s");
-    // The set's own line says "saved" only once the writer thread has fsynced it.
-    s.wait_for("chilli-sauce  saved")
+    // The set's own line says "saved" only once the writer thread has fsynced it, and the
+    // top bar once the curve journalled after it is on disk too.
+    s.wait_for("chilli-sauce  saved");
+    s.wait_for("journal saved")
 }
 
 #[test]
@@ -192,7 +194,8 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
     let mut want = vec!["Herschel–Bulkley (auto)".to_string()];
     for e in &curve.fit.estimates {
         want.push(format!("{} {}", e.name.symbol(), e.name.label()));
-        want.push(format!("   {} ± ", rheoside::units::significant(e.value)));
+        let shown = rheoside::present::estimate(e, rheoside::present::Style::SI);
+        want.push(format!("   {shown}"));
     }
     let want: Vec<&str> = want.iter().map(String::as_str).collect();
     s.wait_for_all(&want);
@@ -236,15 +239,22 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
     let rows: Vec<(String, f64)> = set.1.iter().map(|r| (r.rpm_raw.clone(), r.dial)).collect();
     let want: Vec<(String, f64)> = SPEEDS.iter().map(|r| r.to_string()).zip(DIALS).collect();
     assert_eq!(rows, want);
-    // The answer shown is journalled right after the set, in the `fit --json` shape.
+    // The answer shown is journalled after the set, linked to it, in the `fit --json` shape.
     let result = journal
         .records
         .iter()
-        .find(|r| r.seq == set.0.seq + 1)
-        .expect("a record after the set");
-    let Payload::Result { what, data } = &result.payload else {
+        .find(|r| matches!(&r.payload, Payload::Result { from, .. } if from == &[set.0.seq]))
+        .expect("a result linked to the set");
+    let Payload::Result {
+        what,
+        data,
+        result_kind,
+        ..
+    } = &result.payload
+    else {
         panic!("expected the flow-curve result after the set, got {result:?}");
     };
+    assert_eq!(*result_kind, Some(rheoside::journal::ResultKind::FlowCurve));
     assert!(what.starts_with("flow-curve"), "{what}");
     assert_eq!(data["model"], "herschel-bulkley");
     let k = data["params"]["k_pa_sn"].as_f64().expect("K in the result");
@@ -360,10 +370,12 @@ fn without_a_terminal_it_points_to_the_subcommands() {
         .env_remove("RHEOSIDE_LOG_DIR")
         .output()
         .expect("it runs");
-    assert!(out.status.success());
-    let text = String::from_utf8_lossy(&out.stdout);
+    // Not a terminal: a hint on stderr and exit 2, as for any other wrong place to run.
+    assert_eq!(out.status.code(), Some(2));
+    let text = String::from_utf8_lossy(&out.stderr);
     assert!(text.contains("rheoside --help"), "{text}");
     assert_eq!(text.lines().count(), 1);
+    assert!(out.stdout.is_empty());
 }
 
 /// A dropped SSH session or a killed tmux closes the terminal under the program: it must

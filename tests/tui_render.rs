@@ -14,7 +14,6 @@ use ratatui::{TerminalOptions, Viewport};
 use rheoside::tui::app::App;
 use rheoside::tui::render;
 use rheoside::tui::theme::{ColourMode, Glyphs};
-use rheoside::tui::writer::Reply;
 use std::sync::atomic::Ordering;
 
 fn app_with(mode: ColourMode, glyphs: Glyphs) -> App {
@@ -80,19 +79,8 @@ fn readings_form_shows_si_values_and_what_is_wrong() {
 #[test]
 fn flow_curve_view_shows_the_fit_and_its_constants() {
     let mut a = with_saved_set();
-    let before = lines(&draw(&a, 80, 24));
-    assert!(before.contains("sending"), "{before}");
-    // The writer confirms the set and, after it, the flow-curve result journalled with it.
-    for (ticket, seq) in [(1, 2), (2, 3)] {
-        a.on_reply(&Reply {
-            ticket: Some(ticket),
-            seq: Some(seq),
-            saved_through: seq,
-            pending: 0,
-            error: None,
-            closed: false,
-        });
-    }
+    // The writer numbers and saves the set, then the flow-curve result journalled with it.
+    crate::support::journal_answers(&mut a, true);
     let s = lines(&draw(&a, 80, 24));
     for want in [
         "Herschel–Bulkley (auto)",
@@ -198,14 +186,13 @@ fn ascii_mode_uses_plain_borders_and_marks() {
         keys(&mut a, &[KeyCode::Enter]);
     }
     text(&mut a, "s");
+    crate::support::journal_answers(&mut a, true);
     let s = lines(&draw(&a, 80, 24));
-    // The chart and every border are plain ASCII (units such as Pa·s are text, not marks).
-    let chart: String = s
-        .lines()
-        .skip(2)
-        .map(|l| l.chars().take(41).collect::<String>())
-        .collect();
-    assert!(chart.is_ascii(), "{s}");
+    // The chart, every border and every word of the Flow curve view are plain ASCII: the
+    // symbols are spelt out (tau0, Pa.s^n, R^2, +/-).
+    let bad: Vec<char> = s.chars().filter(|c| !c.is_ascii()).collect();
+    assert!(bad.is_empty(), "not ASCII: {bad:?}\n{s}");
+    assert!(s.contains("tau0 yield stress"), "{s}");
     assert!(
         !s.chars().any(|c| ('\u{2500}'..='\u{259f}').contains(&c)),
         "{s}"

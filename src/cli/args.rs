@@ -45,6 +45,19 @@ pub enum Command {
     Trend(TrendArgs),
 }
 
+impl Command {
+    /// The subcommand as typed, for messages.
+    pub fn name(&self) -> &'static str {
+        match self {
+            Command::Fit(_) => "fit",
+            Command::CheckSite(_) => "check-site",
+            Command::Record(_) => "record",
+            Command::Report(_) => "report",
+            Command::Trend(_) => "trend",
+        }
+    }
+}
+
 #[derive(Debug, Args)]
 pub struct FitArgs {
     /// CSV with header `rpm,dial` or `shear_rate,shear_stress` (SI), optional `temperature`.

@@ -4,6 +4,7 @@ use super::args::{Cli, FitArgs};
 use super::fit_csv::{self, Readings};
 use super::fit_output;
 use crate::instrument::Geometry;
+use crate::present::Style;
 use crate::rheology::Weighting;
 use crate::session::temperature::{TemperatureSeries, analyse_by_temperature};
 use crate::session::{self, FlowCurveInput, FlowCurveOptions, ModelPick};
@@ -41,7 +42,10 @@ pub fn run(cli: &Cli, args: &FitArgs) -> Result<ExitCode> {
         let value = fit_output::json(&curve, &opts, temperature);
         println!("{}", serde_json::to_string_pretty(&value)?);
     } else {
-        print!("{}", fit_output::table(&curve, system, temperature));
+        print!(
+            "{}",
+            fit_output::table(&curve, Style::new(system, false), temperature)
+        );
     }
     Ok(ExitCode::SUCCESS)
 }
@@ -64,9 +68,16 @@ fn print_series(
     } else {
         print!(
             "{}",
-            fit_output::table(&first.curve, system, Some(first.temperature_k))
+            fit_output::table(
+                &first.curve,
+                Style::new(system, false),
+                Some(first.temperature_k),
+            )
         );
-        print!("{}", fit_output::series_table(series, system));
+        print!(
+            "{}",
+            fit_output::series_table(series, Style::new(system, false))
+        );
     }
     Ok(())
 }
@@ -91,7 +102,7 @@ fn options(args: &FitArgs) -> Result<FlowCurveOptions> {
 fn load_site(cli: &Cli) -> Result<Option<Site>> {
     match &cli.site {
         None => Ok(None),
-        Some(path) => crate::site::load_file(path)
+        Some(path) => crate::site::load_or_demo(Some(path))
             .map(Some)
             .map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}")),
     }

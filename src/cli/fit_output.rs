@@ -1,9 +1,10 @@
 //! Printing a fitted flow curve: the human table (site units) and the `--json` contract (SI).
 
-use crate::rheology::{Estimate, Fit, ParamName};
+use crate::present::{self, Style};
+use crate::rheology::{Estimate, Fit};
 use crate::session::FlowCurve;
 use crate::session::temperature::TemperatureSeries;
-use crate::units::{self, Dimension, UnitSystem};
+use crate::units::{Dimension, significant};
 use serde_json::{Map, Value, json};
 use std::fmt::Write as _;
 
@@ -17,10 +18,10 @@ pub fn single_temperature(temps_k: Option<&[f64]>) -> Option<f64> {
         .then_some(first)
 }
 
-pub use crate::session::json::{curve_json as json, finite};
+pub use crate::present::json::{curve_json as json, finite};
 
 /// The human-readable result, in the site's unit system.
-pub fn table(curve: &FlowCurve, system: UnitSystem, temperature_k: Option<f64>) -> String {
+pub fn table(curve: &FlowCurve, style: Style, temperature_k: Option<f64>) -> String {
     let fit = &curve.fit;
     let mut out = String::new();
     let _ = writeln!(out, "Flow curve: {}", fit.model.kind().title());
@@ -28,78 +29,41 @@ pub fn table(curve: &FlowCurve, system: UnitSystem, temperature_k: Option<f64>) 
         let _ = writeln!(
             out,
             "  at {}",
-            units::format(t, Dimension::Temperature, system)
+            present::quantity(t, Dimension::Temperature, style)
         );
     }
-    let _ = writeln!(out, "  why: {}", curve.reason);
+    let _ = writeln!(out, "  why: {}", present::reason::for_curve(curve, style));
     out.push('\n');
-    let _ = writeln!(
-        out,
-        "  {:<24} {:>14}   95 % confidence interval",
-        "parameter", "value"
-    );
+    let _ = writeln!(out, "  {:<24} {:>22}", "parameter", "value ± 95 % interval");
     for e in &fit.estimates {
-        let _ = writeln!(out, "{}", estimate_row(e, system));
+        let _ = writeln!(out, "{}", estimate_row(e, style));
     }
     out.push('\n');
-    let _ = writeln!(out, "{}", quality_line(fit, system));
+    let _ = writeln!(out, "{}", quality_line(fit, style));
     out.push_str(&candidates_table(curve));
-    out.push_str(&points_table(curve, system));
+    out.push_str(&points_table(curve, style));
     for w in &curve.warnings {
         let _ = writeln!(out, "  ! {w}");
     }
     out.push_str(
         "\nAdvice only: confirm against the plant's own procedures before acting on it.\n",
     );
-    out
+    style.text(&out)
 }
 
-fn estimate_row(e: &Estimate, system: UnitSystem) -> String {
-    let label = format!("{} {}", e.name.symbol(), e.name.label());
-    let value = param_text(e.name, e.value, system);
-    let ci = match e.ci95 {
-        Some((lo, hi)) => format!(
-            "{} to {}",
-            param_text(e.name, lo, system),
-            param_text(e.name, hi, system)
-        ),
-        None => "not available (too few points)".to_string(),
-    };
-    let bound = if e.at_bound {
-        "  (held at its bound)"
-    } else {
-        ""
-    };
-    format!("  {label:<24} {value:>14}   {ci}{bound}")
+fn estimate_row(e: &Estimate, style: Style) -> String {
+    let label = format!("{} {}", present::symbol(e.name, style), e.name.label());
+    format!("  {label:<24} {:>22}", present::estimate(e, style))
 }
 
-/// A parameter in display units: stresses and viscosities follow the site's system.
-pub fn param_text(name: ParamName, value: f64, system: UnitSystem) -> String {
-    match name {
-        ParamName::Tau0 => units::format(value, Dimension::Stress, system),
-        ParamName::Mu | ParamName::MuP | ParamName::MuC => {
-            units::format(value, Dimension::DynamicViscosity, system)
-        }
-        ParamName::N => format!("{value:.4}"),
-        ParamName::K => consistency_text(value, system),
-    }
-}
-
-/// K carries stress·sⁿ, so it converts with the stress unit.
-fn consistency_text(k_pa_sn: f64, system: UnitSystem) -> String {
-    let stress_unit = units::display_unit(Dimension::Stress, system);
-    let scaled = units::from_si(k_pa_sn, stress_unit, Dimension::Stress).unwrap_or(k_pa_sn);
-    format!("{} {stress_unit}·sⁿ", units::significant(scaled))
-}
-
-fn quality_line(fit: &Fit, system: UnitSystem) -> String {
+fn quality_line(fit: &Fit, style: Style) -> String {
     let aicc = fit
         .aicc
-        .map_or("not available".to_string(), |a| format!("{a:.2}"));
+        .map_or("not available".to_string(), present::reason::fmt_aicc);
     format!(
-        "  fit quality: R² {:.5}   RMSE {}   AICc {aicc}   degrees of freedom {}",
-        fit.r_squared,
-        units::format(fit.rmse_pa, Dimension::Stress, system),
+        "  fit quality: R² {}   RMSE {}   AICc {aicc}   degrees of freedom {}",
+        present::r_squared(fit.r_squared),
+        present::quantity(fit.rmse_pa, Dimension::Stress, style),
         fit.dof
     )
 }
@@ -112,10 +76,10 @@ fn candidates_table(curve: &FlowCurve) -> String {
     for c in &choice.candidates {
         let line = match &c.outcome {
             Ok(fit) => format!(
-                "    {:<18} AICc {:>9}   R² {:.5}",
+                "    {:<18} AICc {:>9}   R² {}",
                 c.kind.title(),
-                fit.aicc.map_or("—".to_string(), |a| format!("{a:.2}")),
-                fit.r_squared
+                fit.aicc.map_or("—".to_string(), present::reason::fmt_aicc),
+                present::r_squared(fit.r_squared)
             ),
             Err(e) => format!("    {:<18} not fitted: {e}", c.kind.title()),
         };
@@ -124,23 +88,23 @@ fn candidates_table(curve: &FlowCurve) -> String {
     out
 }
 
-fn points_table(curve: &FlowCurve, system: UnitSystem) -> String {
+fn points_table(curve: &FlowCurve, style: Style) -> String {
     let mut out = String::from("\n  readings:\n");
     let _ = writeln!(
         out,
-        "    {:>3} {:>7} {:>7} {:>15} {:>15} {:>11}  flags",
+        "    {:>3} {:>7} {:>7} {:>15} {:>15} {:>15}  flags",
         "#", "rpm", "dial", "Newtonian rate", "rate used", "stress"
     );
     for (i, p) in curve.points.iter().enumerate() {
-        let opt = |v: Option<f64>| v.map_or("—".to_string(), units::significant);
+        let opt = |v: Option<f64>| v.map_or("—".to_string(), significant);
         let row = format!(
-            "    {:>3} {:>7} {:>7} {:>11} 1/s {:>11} 1/s {:>11}  {}",
+            "    {:>3} {:>7} {:>7} {:>15} {:>15} {:>15}  {}",
             i + 1,
             opt(p.rpm),
             opt(p.dial),
-            units::significant(p.newtonian_shear_rate_per_s),
-            units::significant(p.shear_rate_per_s),
-            units::format(p.shear_stress_pa, Dimension::Stress, system),
+            present::quantity(p.newtonian_shear_rate_per_s, Dimension::ShearRate, style),
+            present::quantity(p.shear_rate_per_s, Dimension::ShearRate, style),
+            present::quantity(p.shear_stress_pa, Dimension::Stress, style),
             p.flags.join(", ")
         );
         let _ = writeln!(out, "{}", row.trim_end());
@@ -186,7 +150,7 @@ pub fn add_series_json(value: &mut Value, series: &TemperatureSeries) {
 }
 
 /// The per-temperature summary and the activation energy, for the human table.
-pub fn series_table(series: &TemperatureSeries, system: UnitSystem) -> String {
+pub fn series_table(series: &TemperatureSeries, style: Style) -> String {
     let mut out = format!(
         "\nAt each temperature ({} throughout, so the constants compare):\n",
         series.model.title()
@@ -200,17 +164,17 @@ pub fn series_table(series: &TemperatureSeries, system: UnitSystem) -> String {
             .map(|e| {
                 format!(
                     "{} {}",
-                    e.name.symbol(),
-                    param_text(e.name, e.value, system)
+                    present::symbol(e.name, style),
+                    present::param_text(e.name, e.value, style)
                 )
             })
             .collect();
         let _ = writeln!(
             out,
-            "  {:>9}   {}   R² {:.4}",
-            units::format(c.temperature_k, Dimension::Temperature, system),
+            "  {:>9}   {}   R² {}",
+            present::quantity(c.temperature_k, Dimension::Temperature, style),
             params.join("   "),
-            c.curve.fit.r_squared
+            present::r_squared(c.curve.fit.r_squared)
         );
     }
     let _ = match &series.activation {

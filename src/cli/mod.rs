@@ -1,5 +1,6 @@
-//! The command line: parses arguments and hands each subcommand to its own file.
-//! No subcommand opens the terminal UI.
+//! The command line's subcommands, each in its own file. `main` parses the arguments and
+//! hands either the screens (no subcommand) or this module the work; nothing here knows the
+//! terminal UI.
 
 mod args;
 mod check_site;
@@ -13,30 +14,35 @@ mod trend;
 
 pub use args::{Cli, Command};
 
-use clap::Parser;
 use std::process::ExitCode;
 
 /// Exit code for bad input (a wrong field, an unreadable file): the message goes to stderr.
 pub const EXIT_BAD_INPUT: u8 = 2;
 
-/// Entry point for the binary.
-pub fn main() -> ExitCode {
-    let cli = Cli::parse();
-    let outcome = match &cli.command {
-        None => crate::tui::run(&cli),
-        Some(Command::Fit(a)) => fit::run(&cli, a),
-        Some(Command::CheckSite(a)) => check_site::run(&cli, a),
-        Some(Command::Record(a)) => record::run(&cli, a),
-        Some(Command::Report(a)) => report::run(&cli, a),
-        Some(Command::Trend(a)) => trend::run(&cli, a),
-    };
-    match outcome {
-        Ok(code) => code,
-        Err(err) => {
-            // Best effort: after a terminal hang-up stderr may be gone, and eprintln! panics.
-            use std::io::Write as _;
-            let _ = writeln!(std::io::stderr(), "rheoside: {err:#}");
-            ExitCode::from(EXIT_BAD_INPUT)
-        }
+/// Run one subcommand. Options that act only on the screens are refused here with a
+/// word on where they belong, rather than ignored.
+pub fn run(cli: &Cli, command: &Command) -> anyhow::Result<ExitCode> {
+    refuse_screen_options(cli, command)?;
+    match command {
+        Command::Fit(a) => fit::run(cli, a),
+        Command::CheckSite(a) => check_site::run(cli, a),
+        Command::Record(a) => record::run(cli, a),
+        Command::Report(a) => report::run(cli, a),
+        Command::Trend(a) => trend::run(cli, a),
     }
+}
+
+fn refuse_screen_options(cli: &Cli, command: &Command) -> anyhow::Result<()> {
+    let given: Vec<&str> = [(cli.resume.is_some(), "--resume"), (cli.ascii, "--ascii")]
+        .into_iter()
+        .filter_map(|(on, name)| on.then_some(name))
+        .collect();
+    if given.is_empty() {
+        return Ok(());
+    }
+    anyhow::bail!(
+        "{} only acts on the screens (rheoside with no subcommand); '{}' does not take it",
+        given.join(" and "),
+        command.name()
+    )
 }

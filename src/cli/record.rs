@@ -98,16 +98,9 @@ fn check(cli: &Cli, args: &RecordArgs) -> anyhow::Result<Plan> {
 }
 
 fn load_site(path: Option<&Path>) -> anyhow::Result<(Site, String)> {
-    match path {
-        Some(p) => {
-            let site = crate::site::load_file(p).map_err(|e| anyhow::anyhow!("{e}"))?;
-            Ok((site, p.display().to_string()))
-        }
-        None => {
-            let site = crate::site::demo().map_err(|e| anyhow::anyhow!("{e}"))?;
-            Ok((site, "bundled demo site (invented plant)".to_string()))
-        }
-    }
+    let site = crate::site::load_or_demo(path).map_err(|e| anyhow::anyhow!("{e}"))?;
+    let source = site.source.clone();
+    Ok((site, source))
 }
 
 fn unknown_equipment(site: &Site, id: &str) -> String {

@@ -53,9 +53,25 @@ pub(crate) fn payload(p: Payload) -> Result<Payload, JournalError> {
                 .transpose()?,
             rows: rows.into_iter().map(row).collect::<Result<_, _>>()?,
         },
-        Payload::Result { what, data } => Payload::Result {
+        Payload::Result {
+            what,
+            result_kind,
+            from,
+            data,
+        } => Payload::Result {
             what: line(&what),
+            result_kind,
+            from,
             data: value(data)?,
+        },
+        Payload::Choice {
+            set,
+            model,
+            shear_rate_per_s,
+        } => Payload::Choice {
+            set,
+            model: line(&model),
+            shear_rate_per_s: shear_rate_per_s.filter(|r| r.is_finite()),
         },
         Payload::Note { text } => Payload::Note { text: prose(&text) },
         Payload::Finding { severity, text } => Payload::Finding {

@@ -24,6 +24,6 @@ pub use memory::{Fault, MemorySink};
 pub use naming::{new_session_id, os_user, session_file_name, site_file_stem};
 pub use open::{NewSession, Resumed};
 pub use reader::{Loaded, TornTail, load};
-pub use record::{DialRow, Payload, Record, Severity};
+pub use record::{DialRow, Payload, Record, ResultKind, Severity};
 pub use sink::{FileSink, Sink};
 pub use writer::{Continuation, JournalWriter};

@@ -55,7 +55,22 @@ pub enum Payload {
     /// A computed answer (e.g. a fitted model), kept so a report can show what was seen.
     Result {
         what: String,
+        /// What kind of answer `data` holds; absent in journals written before links.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        result_kind: Option<ResultKind>,
+        /// Sequence numbers of the records it was computed from (a set, readings).
+        #[serde(default, skip_serializing_if = "Vec::is_empty")]
+        from: Vec<u64>,
         data: serde_json::Value,
+    },
+    /// What the operator chose to be shown for a set: the model (`auto` or a model name)
+    /// and the shear rate the apparent viscosity is read at. A replay shows the same.
+    Choice {
+        /// Sequence number of the viscometer set this choice is about.
+        set: u64,
+        model: String,
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        shear_rate_per_s: Option<f64>,
     },
     Note {
         text: String,
@@ -76,6 +91,18 @@ pub struct DialRow {
     pub dial: f64,
 }
 
+/// The kinds of computed answer a journal holds.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum ResultKind {
+    /// A fitted flow curve in the `fit --json` shape.
+    FlowCurve,
+    PipeFlow,
+    Restart,
+    Pump,
+    Tank,
+}
+
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
 #[serde(rename_all = "kebab-case")]
 pub enum Severity {
@@ -93,6 +120,7 @@ impl Payload {
             Payload::Reading { .. } => "reading",
             Payload::ViscometerSet { .. } => "viscometer-set",
             Payload::Result { .. } => "result",
+            Payload::Choice { .. } => "choice",
             Payload::Note { .. } => "note",
             Payload::Finding { .. } => "finding",
             Payload::SessionEnd => "session-end",

@@ -40,6 +40,8 @@ pub struct JournalWriter<S: Sink = FileSink> {
     pending: VecDeque<Pending>,
     /// A failed append may have left bytes past `good_len`; cut them before the next try.
     dirty: bool,
+    /// Records numbered since the last [`JournalWriter::take_numbered`], saved or not yet.
+    numbered: Vec<Record>,
 }
 
 impl<S: Sink> JournalWriter<S> {
@@ -56,6 +58,7 @@ impl<S: Sink> JournalWriter<S> {
             good_len: from.file_len,
             pending: VecDeque::new(),
             dirty: false,
+            numbered: Vec::new(),
         }
     }
 
@@ -94,6 +97,7 @@ impl<S: Sink> JournalWriter<S> {
         line.push(b'\n');
         self.next_seq += 1;
         let seq = record.seq;
+        self.numbered.push(record.clone());
         self.pending.push_back(Pending { record, line });
         self.flush_pending()?;
         Ok(seq)
@@ -145,6 +149,13 @@ impl<S: Sink> JournalWriter<S> {
         self.saved_through = seq;
         self.pending.pop_front();
         Ok(())
+    }
+
+    /// The records numbered since the last call, oldest first, whether or not they are on
+    /// disk yet (compare with [`JournalWriter::saved_through`]). The screens apply these to
+    /// their live session state, so what they show is exactly what the journal holds.
+    pub fn take_numbered(&mut self) -> Vec<Record> {
+        std::mem::take(&mut self.numbered)
     }
 
     /// Write the session-end record.

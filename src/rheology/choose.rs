@@ -10,7 +10,6 @@ use super::data::{Point, check_points};
 use super::error::FitError;
 use super::fit::{Estimate, Fit, FitOptions, fit};
 use super::kind::{ModelKind, ParamName};
-use super::reason;
 
 /// One family tried in a choice, with its fit or why it could not take part.
 #[derive(Debug, Clone)]
@@ -19,19 +18,21 @@ pub struct Candidate {
     pub outcome: Result<Fit, FitError>,
 }
 
-/// The chosen fit, every candidate, and the reason in a sentence an operator can read.
+/// The chosen fit, every candidate, and the steps the rule took (the facts a reason is
+/// worded from, in the presentation layer).
 #[derive(Debug, Clone)]
 pub struct Choice {
     pub best: Fit,
     pub candidates: Vec<Candidate>,
-    pub reason: String,
+    /// Each step down from the lowest-AICc family to a simpler one, in order.
+    pub steps: Vec<StepDown>,
     /// The family with the lowest AICc, when the step-down rule moved away from it.
     pub lowest_aicc: Option<ModelKind>,
 }
 
 /// Why the rule stepped from one family to a simpler one.
 #[derive(Debug, Clone)]
-pub(crate) struct StepDown {
+pub struct StepDown {
     pub from: ModelKind,
     pub to: ModelKind,
     /// The parameter that was not shown to be needed (τ0 or n) and the value that turns it off.
@@ -58,12 +59,13 @@ pub fn choose(points: &[Point], opts: &FitOptions) -> Result<Choice, FitError> {
         return Err(no_comparable(&candidates));
     };
     let (best, steps) = simplify(lowest, &ranked);
-    let reason = reason::explain(best, &ranked, &steps, &candidates);
+    let best = best.clone();
+    let lowest_aicc = (!steps.is_empty()).then(|| lowest.model.kind());
     Ok(Choice {
-        best: best.clone(),
-        lowest_aicc: (!steps.is_empty()).then(|| lowest.model.kind()),
+        best,
+        lowest_aicc,
         candidates,
-        reason,
+        steps,
     })
 }
 
@@ -79,6 +81,19 @@ fn simplify<'a>(lowest: &'a Fit, ranked: &[&'a Fit]) -> (&'a Fit, Vec<StepDown>)
         best = simpler;
     }
     (best, steps)
+}
+
+impl Choice {
+    /// The fits that could be compared, lowest AICc first.
+    pub fn ranked(&self) -> Vec<&Fit> {
+        let mut ranked: Vec<&Fit> = self
+            .candidates
+            .iter()
+            .filter_map(|c| c.outcome.as_ref().ok())
+            .collect();
+        ranked.sort_by(|a, b| aicc_of(a).total_cmp(&aicc_of(b)));
+        ranked
+    }
 }
 
 fn aicc_of(f: &Fit) -> f64 {

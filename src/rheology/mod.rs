@@ -14,11 +14,10 @@ mod linalg;
 mod linear;
 mod loglog;
 mod model;
-mod reason;
 pub mod stats;
 pub mod temperature;
 
-pub use choose::{Candidate, Choice, choose};
+pub use choose::{Candidate, Choice, StepDown, choose};
 pub use data::Point;
 pub use error::{FitError, NoCi};
 pub use fit::{Estimate, Fit, FitOptions, Weighting, fit};

@@ -11,6 +11,16 @@ pub enum ModelPick {
     Fixed(ModelKind),
 }
 
+impl ModelPick {
+    /// As typed and journalled: `auto`, or the model's machine name.
+    pub fn name(self) -> &'static str {
+        match self {
+            ModelPick::Auto => "auto",
+            ModelPick::Fixed(kind) => kind.name(),
+        }
+    }
+}
+
 impl std::str::FromStr for ModelPick {
     type Err = String;
     fn from_str(s: &str) -> Result<Self, Self::Err> {
@@ -65,15 +75,24 @@ pub struct PointOut {
     pub flags: Vec<String>,
 }
 
+/// Why the model shown is the one shown: the facts; `present::reason` words them.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Why {
+    /// The choice rule took it (the steps are in [`FlowCurve::choice`]).
+    Rule,
+    /// Picked by hand; what the rule would have taken, when it could compare.
+    ByHand { rule_would: Option<ModelKind> },
+}
+
 /// The fitted curve with everything needed to judge it.
 #[derive(Debug, Clone)]
 pub struct FlowCurve {
     /// The model shown: chosen by the rule, or picked by hand.
     pub fit: Fit,
-    /// Every candidate and the rule's reason; `None` when too few points for a comparison.
+    /// Every candidate and the rule's steps; `None` when too few points for a comparison.
     pub choice: Option<Choice>,
-    /// Why this model is shown, in words.
-    pub reason: String,
+    /// Why this model is shown.
+    pub why: Why,
     pub points: Vec<PointOut>,
     pub warnings: Vec<String>,
 }
@@ -93,17 +112,28 @@ pub enum FlowCurveError {
     Fit(#[from] FitError),
 }
 
+thread_local! {
+    static CURVES_FITTED: std::cell::Cell<u64> = const { std::cell::Cell::new(0) };
+}
+
+/// How many times [`analyse`] has run on this thread: lets a test show that saving a set
+/// fits it once.
+pub fn curves_fitted_on_this_thread() -> u64 {
+    CURVES_FITTED.with(|c| c.get())
+}
+
 /// Convert, fit and explain. The one function both faces call for a flow curve.
 pub fn analyse(
     input: FlowCurveInput<'_>,
     opts: &FlowCurveOptions,
 ) -> Result<FlowCurve, FlowCurveError> {
+    CURVES_FITTED.with(|c| c.set(c.get() + 1));
     let mut converted = convert(input)?;
     let points = fit_points(input, converted.as_deref(), opts.rate_correction);
     let fit_opts = FitOptions {
         weighting: opts.weighting,
     };
-    let (fit, choice, reason) = pick_model(&points, opts.model, &fit_opts)?;
+    let (fit, choice, why) = pick_model(&points, opts.model, &fit_opts)?;
     let mut warnings = Vec::new();
     if let (FlowCurveInput::Dial { geometry, .. }, Some(rows)) = (input, converted.as_mut()) {
         instrument::flag_unsheared_gap(geometry, rows, fit.model.yield_stress());
@@ -121,7 +151,7 @@ pub fn analyse(
     Ok(FlowCurve {
         fit,
         choice,
-        reason,
+        why,
         points,
         warnings,
     })
@@ -163,30 +193,18 @@ fn pick_model(
     points: &[Point],
     pick: ModelPick,
     opts: &FitOptions,
-) -> Result<(Fit, Option<Choice>, String), FitError> {
+) -> Result<(Fit, Option<Choice>, Why), FitError> {
     match pick {
         ModelPick::Auto => {
             let choice = rheology::choose(points, opts)?;
-            let reason = choice.reason.clone();
-            Ok((choice.best.clone(), Some(choice), reason))
+            Ok((choice.best.clone(), Some(choice), Why::Rule))
         }
         ModelPick::Fixed(kind) => {
             let fit = rheology::fit(kind, points, opts)?;
             let choice = rheology::choose(points, opts).ok();
-            let reason = hand_pick_reason(kind, choice.as_ref());
-            Ok((fit, choice, reason))
+            let rule_would = choice.as_ref().map(|c| c.best.model.kind());
+            Ok((fit, choice, Why::ByHand { rule_would }))
         }
-    }
-}
-
-fn hand_pick_reason(kind: ModelKind, choice: Option<&Choice>) -> String {
-    match choice {
-        Some(c) if c.best.model.kind() != kind => format!(
-            "{} chosen by hand; the choice rule would take {}",
-            kind.title(),
-            c.best.model.kind().title()
-        ),
-        _ => format!("{} chosen by hand", kind.title()),
     }
 }
 

@@ -5,12 +5,12 @@
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
 pub mod flow_curve;
-pub mod json;
 pub mod state;
 pub mod temperature;
 pub mod trend;
 
 pub use flow_curve::{
-    FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, PointOut, analyse,
+    FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, PointOut, Why, analyse,
+    curves_fitted_on_this_thread,
 };
 pub use state::{Entry, Moment, SessionState, SetError};

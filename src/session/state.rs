@@ -4,9 +4,11 @@
 //! Pure: records in, state out. The TUI applies each record as it is saved; `report`
 //! replays a whole file; both go through [`SessionState::apply`], so they cannot disagree.
 
-use super::flow_curve::{FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, analyse};
+use super::flow_curve::{
+    FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, analyse,
+};
 use crate::instrument::DialReading;
-use crate::journal::{DialRow, Payload, Record, Severity};
+use crate::journal::{DialRow, Payload, Record, ResultKind, Severity};
 use crate::site::Site;
 use chrono::{DateTime, FixedOffset, Utc};
 
@@ -66,7 +68,21 @@ pub struct ViscometerSet {
     pub temperature_raw: Option<String>,
     pub temperature_k: Option<f64>,
     pub rows: Vec<DialRow>,
+    /// The curve by the choice rule, fitted once when the set is applied.
     pub curve: Result<FlowCurve, SetError>,
+    /// What the operator last chose to see for this set (a `choice` record).
+    pub pick: ModelPick,
+    /// The shear rate the apparent viscosity was read at, when one was chosen.
+    pub shear_rate_per_s: Option<f64>,
+    /// The curve of a model picked by hand; `None` while the rule's choice is shown.
+    pub by_hand: Option<Result<FlowCurve, SetError>>,
+}
+
+impl ViscometerSet {
+    /// The curve on screen: the hand-picked model's, or the rule's.
+    pub fn shown(&self) -> &Result<FlowCurve, SetError> {
+        self.by_hand.as_ref().unwrap_or(&self.curve)
+    }
 }
 
 impl PartialEq for ViscometerSet {
@@ -76,7 +92,16 @@ impl PartialEq for ViscometerSet {
             (Err(a), Err(b)) => a == b,
             _ => false,
         };
+        let hand = match (&self.by_hand, &other.by_hand) {
+            (Some(Ok(a)), Some(Ok(b))) => same_curve(a, b),
+            (Some(Err(a)), Some(Err(b))) => a == b,
+            (None, None) => true,
+            _ => false,
+        };
         curves
+            && hand
+            && self.pick == other.pick
+            && self.shear_rate_per_s == other.shear_rate_per_s
             && self.viscometer == other.viscometer
             && self.product == other.product
             && self.temperature_raw == other.temperature_raw
@@ -96,6 +121,10 @@ fn same_curve(a: &FlowCurve, b: &FlowCurve) -> bool {
 #[derive(Debug, Clone, PartialEq)]
 pub struct SavedResult {
     pub what: String,
+    /// What kind of answer it is; `None` in journals written before results were typed.
+    pub kind: Option<ResultKind>,
+    /// The records it was computed from.
+    pub from: Vec<u64>,
     pub data: serde_json::Value,
 }
 
@@ -118,6 +147,8 @@ pub struct SessionState {
     pub last: Option<Moment>,
     pub last_seq: u64,
     pub records: usize,
+    /// Every record applied, in order (the Journal view lists these).
+    pub log: Vec<Record>,
     /// Everyone who wrote a record, in order of first appearance (handovers add names).
     pub operators: Vec<String>,
     /// Equipment ids named by records, in order of first appearance.
@@ -154,6 +185,7 @@ impl SessionState {
         self.last = Some(at);
         self.last_seq = record.seq;
         self.records += 1;
+        self.log.push(record.clone());
     }
 
     /// File the payload under its kind.
@@ -182,13 +214,25 @@ impl SessionState {
                     self.sets.push(entry(record, at, item));
                 }
             }
-            Payload::Result { what, data } => {
+            Payload::Result {
+                what,
+                result_kind,
+                from,
+                data,
+            } => {
                 let item = SavedResult {
                     what: what.clone(),
+                    kind: *result_kind,
+                    from: from.clone(),
                     data: data.clone(),
                 };
                 self.results.push(entry(record, at, item));
             }
+            Payload::Choice {
+                set,
+                model,
+                shear_rate_per_s,
+            } => self.choose(site, record.seq, *set, model, *shear_rate_per_s),
             Payload::Note { text } => self.notes.push(entry(record, at, text.clone())),
             Payload::Finding { severity, text } => {
                 let item = FindingItem {
@@ -204,6 +248,51 @@ impl SessionState {
     /// The start time, or the first record's time for a journal whose start is missing.
     pub fn sort_key(&self) -> Option<Moment> {
         self.started.or(self.last)
+    }
+
+    /// A by-hand model or shear rate for a set: refit with that model (the rule's curve is
+    /// kept), so a replay shows what was on screen.
+    fn choose(&mut self, site: &Site, seq: u64, set: u64, model: &str, rate: Option<f64>) {
+        let pick = match model.parse::<ModelPick>() {
+            Ok(p) => p,
+            Err(e) => {
+                self.problems
+                    .push(format!("record {seq}: choice of model '{model}': {e}"));
+                return;
+            }
+        };
+        let Some(entry) = self.sets.iter_mut().find(|e| e.seq == set) else {
+            self.problems.push(format!(
+                "record {seq} chooses how to show record {set}, which is not a viscometer set"
+            ));
+            return;
+        };
+        let s = &mut entry.item;
+        if s.pick != pick {
+            s.by_hand = match pick {
+                ModelPick::Auto => None,
+                ModelPick::Fixed(_) => Some(fit_rows_with(site, &s.viscometer, &s.rows, pick)),
+            };
+            s.pick = pick;
+        }
+        s.shear_rate_per_s = rate.or(s.shear_rate_per_s);
+    }
+
+    /// The newest set, if any.
+    pub fn latest_set(&self) -> Option<&Entry<ViscometerSet>> {
+        self.sets.last()
+    }
+
+    /// The newest set of one product.
+    pub fn latest_set_of(&self, product: &str) -> Option<&Entry<ViscometerSet>> {
+        self.sets.iter().rev().find(|e| e.item.product == product)
+    }
+
+    /// Results computed from the record `seq`, oldest first.
+    pub fn results_from(&self, seq: u64) -> impl Iterator<Item = &Entry<SavedResult>> {
+        self.results
+            .iter()
+            .filter(move |r| r.item.from.contains(&seq))
     }
 
     fn check_envelope(&mut self, record: &Record) {
@@ -299,11 +388,24 @@ fn fitted_set(site: &Site, payload: &Payload) -> Option<ViscometerSet> {
         temperature_k: *temperature_k,
         rows: rows.clone(),
         curve: fit_rows(site, viscometer, rows),
+        pick: ModelPick::Auto,
+        shear_rate_per_s: None,
+        by_hand: None,
     })
 }
 
-/// Fit journalled dial rows on the site's geometry for `viscometer`.
+/// Fit journalled dial rows on the site's geometry for `viscometer`, model by the rule.
 pub fn fit_rows(site: &Site, viscometer: &str, rows: &[DialRow]) -> Result<FlowCurve, SetError> {
+    fit_rows_with(site, viscometer, rows, ModelPick::Auto)
+}
+
+/// Fit journalled dial rows with a given model pick.
+pub fn fit_rows_with(
+    site: &Site,
+    viscometer: &str,
+    rows: &[DialRow],
+    pick: ModelPick,
+) -> Result<FlowCurve, SetError> {
     let Some(v) = site.viscometer(viscometer) else {
         let known: Vec<&str> = site.viscometers.iter().map(|v| v.id.as_str()).collect();
         return Err(SetError::UnknownViscometer {
@@ -323,5 +425,9 @@ pub fn fit_rows(site: &Site, viscometer: &str, rows: &[DialRow]) -> Result<FlowC
         geometry: &v.geometry,
         readings: &readings,
     };
-    Ok(analyse(input, &FlowCurveOptions::default())?)
+    let opts = FlowCurveOptions {
+        model: pick,
+        ..FlowCurveOptions::default()
+    };
+    Ok(analyse(input, &opts)?)
 }

@@ -51,9 +51,23 @@ const UNIT_SYSTEMS: [(&str, crate::units::UnitSystem); 2] = [
     ("us-customary", crate::units::UnitSystem::UsCustomary),
 ];
 
+/// Where the bundled demo came from, as every command journals it (`site_source`).
+pub const DEMO_SOURCE: &str = "bundled demo site (invented plant)";
+
 /// The bundled demo site; a test checks that it always loads.
 pub fn demo() -> Result<Site, SiteErrors> {
-    load_str(DEMO_TOML, DEMO_LABEL)
+    let mut site = load_str(DEMO_TOML, DEMO_LABEL)?;
+    site.source = DEMO_SOURCE.to_string();
+    Ok(site)
+}
+
+/// The one site loader every command uses: this config file, or the bundled demo when no
+/// file is named. `Site::source` says which, in the words the journal records.
+pub fn load_or_demo(path: Option<&Path>) -> Result<Site, SiteErrors> {
+    match path {
+        Some(p) => load_file(p),
+        None => demo(),
+    }
 }
 
 /// Read and validate a site config file. An unreadable file is one error at line 0.

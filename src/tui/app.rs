@@ -1,18 +1,21 @@
 //! The app's state and its one update path: a key becomes an action (through the key map),
 //! the overlay or the active view handles it, and the effects it returns are applied here.
-//! Records for the journal wait in an outbox that the loop hands to the writer thread.
+//! Records for the journal wait in an outbox that the loop hands to the writer thread; the
+//! records the journal numbers come back in its replies and are applied to the live session
+//! state, from which every view draws. A set is fitted there, once.
 
 use super::ctx::Ctx;
 use super::keymap::{self, Action, Context, Key};
 use super::overlay::Overlay;
 use super::strings::{confirm as cs, note as ns, status as ss};
-use super::views::{self, Draft, Effect, SavedSet, SessionEvent, View, ViewId};
+use super::views::{self, Draft, Effect, View, ViewId};
 use super::widgets::editing::{self, EditStep, Leave};
 use super::writer::{Reply, Ticket};
-use crate::journal::{Payload, Record};
+use crate::journal::{Payload, Record, ResultKind};
+use crate::present::json::curve_json;
+use crate::session::{FlowCurve, FlowCurveOptions};
 use chrono::{DateTime, FixedOffset};
 use ratatui::crossterm::event::KeyEvent;
-use std::sync::Arc;
 
 /// A record for the writer thread.
 #[derive(Debug, Clone, PartialEq)]
@@ -52,11 +55,21 @@ impl App {
         }
     }
 
-    /// Pick up where a resumed journal left off: its records fill the Journal view, its
-    /// last set is shown again on the Flow curve view, and that set's product and sample
-    /// point become the picks.
+    /// Records already on disk before the screens started (the session-start record, or a
+    /// resumed file): applied to the live state, with nothing journalled in answer.
+    pub fn apply_saved(&mut self, records: &[Record]) {
+        for r in records {
+            self.ctx.session.apply(&self.ctx.site, r);
+            self.ctx.log.saved_up_to(r.seq);
+        }
+        self.refresh_views();
+    }
+
+    /// Pick up where a resumed journal left off: its records fill the state (through the
+    /// same replay the handover report uses), and its last set's product and sample point
+    /// become the picks, with its curve shown as it was.
     pub fn resume_from(&mut self, records: &[Record]) {
-        self.ctx.log = super::session_log::SessionLog::from_records(records);
+        self.apply_saved(records);
         self.status = format!(
             "{} {} {}; {}.",
             ss::RESUMED,
@@ -64,29 +77,11 @@ impl App {
             ss::RECORDS,
             ss::RESUMED_TAIL
         );
-        // The same replay the handover report uses, so both see the same last set.
-        let state = crate::session::SessionState::replay(&self.ctx.site, records);
-        let Some(last) = state.sets.last() else {
+        let Some(last) = self.ctx.session.latest_set() else {
             return;
         };
-        let item = &last.item;
-        let Some(v) = self.ctx.site.viscometer(&item.viscometer) else {
-            return;
-        };
-        let readings = item
-            .rows
-            .iter()
-            .map(|r| crate::instrument::DialReading::new(r.rpm, r.dial));
-        let set = Arc::new(SavedSet {
-            viscometer: item.viscometer.clone(),
-            geometry: v.geometry.clone(),
-            product: item.product.clone(),
-            temperature_text: item.temperature_raw.clone(),
-            readings: readings.collect(),
-        });
-        self.ctx.picks.product = Some(item.product.clone());
+        self.ctx.picks.product = Some(last.item.product.clone());
         self.ctx.picks.equipment = last.equipment.clone();
-        self.broadcast(&SessionEvent::SetSaved { set, ticket: None });
         self.apply(vec![Effect::Show(ViewId::Curve)]);
     }
 
@@ -134,8 +129,74 @@ impl App {
         std::mem::take(&mut self.outbox)
     }
 
+    /// The writer thread's answer: its numbered records join the live state, and a new set
+    /// or a model picked by hand gets its curve journalled as a result linked to it.
     pub fn on_reply(&mut self, reply: &Reply) {
         self.ctx.log.apply(reply);
+        for record in &reply.records {
+            let pick_before = self.pick_of_choice(record);
+            self.ctx.session.apply(&self.ctx.site, record);
+            self.answer(record, pick_before);
+        }
+        if !reply.records.is_empty() {
+            self.refresh_views();
+        }
+    }
+
+    /// For a choice record, the model its set showed before it.
+    fn pick_of_choice(&self, record: &Record) -> Option<crate::session::ModelPick> {
+        let Payload::Choice { set, .. } = &record.payload else {
+            return None;
+        };
+        let s = &self.ctx.session;
+        s.sets.iter().find(|e| e.seq == *set).map(|e| e.item.pick)
+    }
+
+    /// Journal what the tool answered for a record just applied.
+    fn answer(&mut self, record: &Record, pick_before: Option<crate::session::ModelPick>) {
+        let seq = record.seq;
+        match &record.payload {
+            Payload::ViscometerSet { .. } => {
+                let Some(entry) = self.ctx.session.sets.iter().find(|e| e.seq == seq) else {
+                    return;
+                };
+                let draft = entry.item.curve.as_ref().ok().map(|curve| {
+                    curve_result(curve, entry.item.temperature_k, vec![seq], &entry.equipment)
+                });
+                if let Some(d) = draft {
+                    self.journal(d);
+                }
+                self.apply(vec![Effect::Show(ViewId::Curve)]);
+            }
+            Payload::Choice { set, .. } => {
+                let Some(entry) = self.ctx.session.sets.iter().find(|e| e.seq == *set) else {
+                    return;
+                };
+                if pick_before == Some(entry.item.pick) {
+                    return;
+                }
+                let hand = entry.item.by_hand.as_ref().and_then(|c| c.as_ref().ok());
+                let draft = hand.map(|curve| {
+                    curve_result(
+                        curve,
+                        entry.item.temperature_k,
+                        vec![*set, seq],
+                        &entry.equipment,
+                    )
+                });
+                if let Some(d) = draft {
+                    self.journal(d);
+                }
+            }
+            _ => {}
+        }
+    }
+
+    /// Let every view bring what it derives from the state up to date.
+    fn refresh_views(&mut self) {
+        for view in &mut self.views {
+            view.refresh(&self.ctx);
+        }
     }
 
     pub fn tick(&mut self, now: DateTime<FixedOffset>) {
@@ -157,7 +218,7 @@ impl App {
         if note {
             out.push(format!("{} {}.", ns::SUMMARY, cs::FORM_INPUT));
         }
-        let n = self.ctx.log.unsaved();
+        let n = self.ctx.unsaved();
         if n > 0 {
             out.push(format!("{n} {}.", cs::RECORDS_UNSAVED));
         }
@@ -287,12 +348,6 @@ impl App {
                 Effect::Journal(d) => {
                     self.journal(d);
                 }
-                Effect::SaveSet { drafts, set } => {
-                    let tickets: Vec<Ticket> =
-                        drafts.into_iter().map(|d| self.journal(d)).collect();
-                    let ticket = tickets.first().copied();
-                    self.broadcast(&SessionEvent::SetSaved { set, ticket });
-                }
                 Effect::Show(id) => {
                     if let Some(i) = self.views.iter().position(|v| v.id() == id) {
                         self.active = i;
@@ -311,10 +366,24 @@ impl App {
         });
         ticket
     }
+}
 
-    fn broadcast(&mut self, event: &SessionEvent) {
-        for view in &mut self.views {
-            view.on_event(event, &self.ctx);
-        }
+/// The curve shown, as a result record linked to what it was computed from.
+fn curve_result(
+    curve: &FlowCurve,
+    temperature_k: Option<f64>,
+    from: Vec<u64>,
+    equipment: &Option<String>,
+) -> Draft {
+    let payload = Payload::Result {
+        what: format!("flow-curve {}", curve.fit.model.kind().title()),
+        result_kind: Some(ResultKind::FlowCurve),
+        from,
+        data: curve_json(curve, &FlowCurveOptions::default(), temperature_k),
+    };
+    Draft {
+        summary: super::session_log::summarize(&payload, equipment.as_deref()),
+        equipment: equipment.clone(),
+        payload,
     }
 }

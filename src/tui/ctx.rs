@@ -1,9 +1,12 @@
-//! What every view may read: the site, who is working, what was picked, the journal as the
-//! UI knows it, the clock (as last told) and the theme. Views change it only by returning
-//! effects, which the app applies.
+//! What every view may read: the site, who is working, what was picked, the live session
+//! state (every record the journal has numbered, applied as it comes back from the writer
+//! thread), the journal link's state, the clock (as last told), the theme and the
+//! presentation style. Views change it only by returning effects, which the app applies.
 
 use super::session_log::SessionLog;
-use super::theme::Theme;
+use super::theme::{Glyphs, Theme};
+use crate::present::Style;
+use crate::session::SessionState;
 use crate::site::{EquipmentKind, Site};
 use chrono::{DateTime, FixedOffset};
 
@@ -33,6 +36,9 @@ pub struct Ctx {
     pub site: Site,
     pub operator: String,
     pub picks: Picks,
+    /// The session as the journal holds it; every view derives what it shows from this.
+    pub session: SessionState,
+    /// What is in flight to the journal and how far the disk has got.
     pub log: SessionLog,
     pub clock: SessionClock,
     pub theme: Theme,
@@ -41,6 +47,16 @@ pub struct Ctx {
 }
 
 impl Ctx {
+    /// How numbers and symbols are shown: the site's units, ASCII when the theme is.
+    pub fn style(&self) -> Style {
+        Style::new(self.site.unit_system, self.theme.glyphs == Glyphs::Ascii)
+    }
+
+    /// Records sent but not known to be on disk.
+    pub fn unsaved(&self) -> usize {
+        self.log.unsaved(&self.session)
+    }
+
     /// Sample points: everything on the site but the viscometers themselves.
     pub fn sample_points(&self) -> Vec<(&str, EquipmentKind, &str)> {
         let s = &self.site;

@@ -79,7 +79,7 @@ pub fn row(area: Rect, index: u16) -> Rect {
 }
 
 /// `text` in at most `width` characters, "…" marking a cut at the end.
-pub fn clip_end(text: &str, width: usize) -> String {
+pub fn clip_end(text: &str, width: usize, cut: char) -> String {
     if text.chars().count() <= width {
         return text.to_string();
     }
@@ -87,12 +87,12 @@ pub fn clip_end(text: &str, width: usize) -> String {
         return String::new();
     }
     let head: String = text.chars().take(width - 1).collect();
-    format!("{head}…")
+    format!("{head}{cut}")
 }
 
 /// `text` in at most `width` characters, "…" marking a cut at the start (a file is told
 /// apart by its name, not by its folder).
-pub fn clip_start(text: &str, width: usize) -> String {
+pub fn clip_start(text: &str, width: usize, cut: char) -> String {
     let n = text.chars().count();
     if n <= width {
         return text.to_string();
@@ -101,7 +101,7 @@ pub fn clip_start(text: &str, width: usize) -> String {
         return String::new();
     }
     let tail: String = text.chars().skip(n + 1 - width).collect();
-    format!("…{tail}")
+    format!("{cut}{tail}")
 }
 
 #[cfg(test)]
@@ -110,11 +110,15 @@ mod tests {
 
     #[test]
     fn clipped_text_keeps_the_telling_end() {
-        assert_eq!(clip_end("Marrowdale Unit 4", 40), "Marrowdale Unit 4");
-        assert_eq!(clip_end("Marrowdale Unit 4", 8), "Marrowd…");
-        assert_eq!(clip_start("/tmp/logs/site_1.jsonl", 13), "…site_1.jsonl");
-        assert_eq!(clip_start("abc", 0), "");
-        assert_eq!(clip_end("abc", 0), "");
+        assert_eq!(clip_end("Marrowdale Unit 4", 40, '…'), "Marrowdale Unit 4");
+        assert_eq!(clip_end("Marrowdale Unit 4", 8, '…'), "Marrowd…");
+        assert_eq!(
+            clip_start("/tmp/logs/site_1.jsonl", 13, '…'),
+            "…site_1.jsonl"
+        );
+        assert_eq!(clip_start("abc", 0, '…'), "");
+        assert_eq!(clip_end("abc", 0, '…'), "");
+        assert_eq!(clip_end("Marrowdale Unit 4", 8, '~'), "Marrowd~");
     }
 
     #[test]

@@ -11,6 +11,7 @@ pub mod event;
 pub mod key;
 pub mod keymap;
 pub mod layout;
+pub mod options;
 pub mod overlay;
 pub mod render;
 pub mod session_log;
@@ -22,9 +23,9 @@ pub mod views;
 pub mod widgets;
 pub mod writer;
 
-use crate::cli::Cli;
 use app::{App, RunState};
 use event::Input;
+pub use options::TuiOptions;
 use std::io::IsTerminal;
 use std::process::ExitCode;
 use std::time::Duration;
@@ -34,12 +35,15 @@ use writer::JournalLink;
 /// How long to wait for a key before looking at the journal, the clock and signals.
 const POLL: Duration = Duration::from_millis(100);
 
-pub fn run(cli: &Cli) -> anyhow::Result<ExitCode> {
+/// Exit code for bad input or a wrong place to run (no terminal), as the command line uses.
+pub const EXIT_BAD_INPUT: u8 = 2;
+
+pub fn run(opts: &TuiOptions) -> anyhow::Result<ExitCode> {
     if !std::io::stdout().is_terminal() {
-        println!("{}", strings::NOT_A_TERMINAL);
-        return Ok(ExitCode::SUCCESS);
+        eprintln!("{}", strings::NOT_A_TERMINAL);
+        return Ok(ExitCode::from(EXIT_BAD_INPUT));
     }
-    let start = match startup::prepare(cli)? {
+    let start = match startup::prepare(opts)? {
         Ok(start) => start,
         Err(code) => return Ok(code),
     };

@@ -49,8 +49,8 @@ pub fn draw(app: &App, frame: &mut Frame) {
 
 fn draw_top(frame: &mut Frame, area: Rect, ctx: &Ctx) {
     let t = &ctx.theme;
-    let journal = match ctx.log.state() {
-        JournalState::Saved if ctx.log.entries().is_empty() => {
+    let journal = match ctx.log.state(&ctx.session) {
+        JournalState::Saved if ctx.session.log.is_empty() => {
             Span::styled(top::JOURNAL_EMPTY, t.dim)
         }
         JournalState::Saved => Span::styled(top::JOURNAL_SAVED, t.ok),
@@ -71,7 +71,7 @@ fn draw_top(frame: &mut Frame, area: Rect, ctx: &Ctx) {
     ]);
     let right_w = right.width() as u16;
     let app_name = format!(" {} ", strings::APP_NAME);
-    let operator = clip_end(&sanitize(&ctx.operator, false), 16);
+    let operator = clip_end(&sanitize(&ctx.operator, false), 16, t.marks.cut);
     let op_label = format!("  {} ", top::OPERATOR);
     // The operator is never cut off; a long site name gives way first.
     let fixed = right_w as usize + 3 + app_name.len() + op_label.len() + operator.chars().count();
@@ -79,7 +79,14 @@ fn draw_top(frame: &mut Frame, area: Rect, ctx: &Ctx) {
     let left = Line::from(vec![
         Span::styled(app_name, t.tab_active),
         Span::styled(
-            format!(" {}", clip_end(&sanitize(&ctx.site.name, false), site_room)),
+            format!(
+                " {}",
+                clip_end(
+                    &ctx.style().text(&sanitize(&ctx.site.name, false)),
+                    site_room,
+                    t.marks.cut
+                )
+            ),
             t.title,
         ),
         Span::styled(op_label, t.dim),
@@ -114,7 +121,7 @@ fn draw_tabs(frame: &mut Frame, area: Rect, app: &App) {
 
 fn draw_status(frame: &mut Frame, area: Rect, app: &App) {
     let t = &app.ctx.theme;
-    let (text, style) = match app.ctx.log.state() {
+    let (text, style) = match app.ctx.log.state(&app.ctx.session) {
         JournalState::Error { message, .. } => (message, t.error),
         _ => (app.status().to_string(), t.base),
     };

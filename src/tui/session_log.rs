@@ -3,7 +3,8 @@
 
 use super::strings::journal as s;
 use super::writer::{Reply, Ticket};
-use crate::journal::{Payload, Record};
+use crate::journal::Payload;
+use crate::session::SessionState;
 use chrono::{DateTime, FixedOffset};
 
 /// Where one record stands.
@@ -22,7 +23,6 @@ pub enum EntryStatus {
 /// One line of the Journal view.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Entry {
-    pub ticket: Option<Ticket>,
     pub seq: Option<u64>,
     pub time: DateTime<FixedOffset>,
     pub summary: String,
@@ -37,9 +37,20 @@ pub enum JournalState {
     Error { unsaved: usize, message: String },
 }
 
+/// A record sent to the writer thread and not numbered yet.
+#[derive(Debug, Clone, PartialEq)]
+struct InFlight {
+    ticket: Ticket,
+    time: DateTime<FixedOffset>,
+    summary: String,
+}
+
+/// The UI's side of the journal link: what is in flight, what was refused, how far the disk
+/// has got. The records themselves live in the session state, applied as they are numbered.
 #[derive(Debug, Clone, Default)]
 pub struct SessionLog {
-    entries: Vec<Entry>,
+    in_flight: Vec<InFlight>,
+    refused: Vec<(InFlight, String)>,
     last_error: Option<String>,
     next_ticket: Ticket,
     /// Every record up to this number is on disk.
@@ -47,35 +58,8 @@ pub struct SessionLog {
 }
 
 impl SessionLog {
-    /// Records already in a file (on resume): all saved.
-    pub fn from_records(records: &[Record]) -> SessionLog {
-        let entries = records
-            .iter()
-            .map(|r| Entry {
-                ticket: None,
-                seq: Some(r.seq),
-                time: r.utc.with_timezone(&r.offset),
-                summary: summarize(&r.payload, r.equipment.as_deref()),
-                status: EntryStatus::Saved,
-            })
-            .collect();
-        SessionLog {
-            entries,
-            last_error: None,
-            next_ticket: 1,
-            saved_through: records.last().map_or(0, |r| r.seq),
-        }
-    }
-
-    /// A record the journal saved before the UI started (the session-start record).
-    pub fn push_saved(&mut self, seq: u64, time: DateTime<FixedOffset>, summary: String) {
-        self.entries.push(Entry {
-            ticket: None,
-            seq: Some(seq),
-            time,
-            summary,
-            status: EntryStatus::Saved,
-        });
+    /// Records already on disk before the UI started (a resumed file, the start record).
+    pub fn saved_up_to(&mut self, seq: u64) {
         self.saved_through = self.saved_through.max(seq);
     }
 
@@ -83,36 +67,27 @@ impl SessionLog {
         self.saved_through
     }
 
-    /// Add an entry for a record about to be sent; returns its ticket.
+    /// Add a record about to be sent; returns its ticket.
     pub fn push(&mut self, time: DateTime<FixedOffset>, summary: String) -> Ticket {
         self.next_ticket = self.next_ticket.max(1);
         let ticket = self.next_ticket;
         self.next_ticket += 1;
-        self.entries.push(Entry {
-            ticket: Some(ticket),
-            seq: None,
+        self.in_flight.push(InFlight {
+            ticket,
             time,
             summary,
-            status: EntryStatus::Sending,
         });
         ticket
     }
 
-    /// Take in the writer thread's answer.
+    /// Take in the writer thread's answer (its records go to the session state).
     pub fn apply(&mut self, reply: &Reply) {
         if let Some(ticket) = reply.ticket
-            && let Some(e) = self.entries.iter_mut().find(|e| e.ticket == Some(ticket))
+            && let Some(i) = self.in_flight.iter().position(|e| e.ticket == ticket)
         {
-            e.seq = reply.seq;
-            e.status = match (&reply.error, reply.seq) {
-                (Some(msg), None) => EntryStatus::Refused(msg.clone()),
-                _ => EntryStatus::Unsaved,
-            };
-        }
-        for e in &mut self.entries {
-            let numbered_unsaved = matches!(e.status, EntryStatus::Unsaved | EntryStatus::Sending);
-            if numbered_unsaved && e.seq.is_some_and(|seq| seq <= reply.saved_through) {
-                e.status = EntryStatus::Saved;
+            let sent = self.in_flight.remove(i);
+            if let (None, Some(why)) = (reply.seq, &reply.error) {
+                self.refused.push((sent, why.clone()));
             }
         }
         self.last_error = reply.error.clone();
@@ -124,27 +99,56 @@ impl SessionLog {
         self.last_error = Some(why.to_string());
     }
 
-    pub fn entries(&self) -> &[Entry] {
-        &self.entries
+    /// Where a numbered record stands.
+    pub fn status_of_seq(&self, seq: u64) -> EntryStatus {
+        if seq <= self.saved_through {
+            EntryStatus::Saved
+        } else {
+            EntryStatus::Unsaved
+        }
     }
 
-    pub fn status_of(&self, ticket: Ticket) -> Option<&EntryStatus> {
-        self.entries
-            .iter()
-            .find(|e| e.ticket == Some(ticket))
-            .map(|e| &e.status)
+    /// Whether anything sent has not been numbered yet.
+    pub fn sending(&self) -> bool {
+        !self.in_flight.is_empty()
+    }
+
+    /// The Journal view's rows: every record of the session, then refused and in-flight ones.
+    pub fn rows(&self, state: &SessionState) -> Vec<Entry> {
+        let numbered = state.log.iter().map(|r| Entry {
+            seq: Some(r.seq),
+            time: r.utc.with_timezone(&r.offset),
+            summary: summarize(&r.payload, r.equipment.as_deref()),
+            status: self.status_of_seq(r.seq),
+        });
+        let refused = self.refused.iter().map(|(e, why)| Entry {
+            seq: None,
+            time: e.time,
+            summary: e.summary.clone(),
+            status: EntryStatus::Refused(why.clone()),
+        });
+        let sending = self.in_flight.iter().map(|e| Entry {
+            seq: None,
+            time: e.time,
+            summary: e.summary.clone(),
+            status: EntryStatus::Sending,
+        });
+        numbered.chain(refused).chain(sending).collect()
     }
 
     /// Records sent but not known to be on disk.
-    pub fn unsaved(&self) -> usize {
-        self.entries
+    pub fn unsaved(&self, state: &SessionState) -> usize {
+        let numbered = state
+            .log
             .iter()
-            .filter(|e| matches!(e.status, EntryStatus::Sending | EntryStatus::Unsaved))
-            .count()
+            .rev()
+            .take_while(|r| r.seq > self.saved_through)
+            .count();
+        numbered + self.in_flight.len()
     }
 
-    pub fn state(&self) -> JournalState {
-        let unsaved = self.unsaved();
+    pub fn state(&self, session: &SessionState) -> JournalState {
+        let unsaved = self.unsaved(session);
         match (&self.last_error, unsaved) {
             (Some(message), _) => JournalState::Error {
                 unsaved,
@@ -189,7 +193,28 @@ pub fn summarize(payload: &Payload, equipment: Option<&str>) -> String {
                 super::strings::readings::READINGS_WORD
             )
         }
-        Payload::Result { what, .. } => format!("{}{at}: {}", s::RESULT, clean(what)),
+        Payload::Result { what, from, .. } => {
+            let of = match from.first() {
+                Some(seq) => format!(" (from #{seq})"),
+                None => String::new(),
+            };
+            format!("{}{at}: {}{of}", s::RESULT, clean(what))
+        }
+        Payload::Choice {
+            set,
+            model,
+            shear_rate_per_s,
+        } => {
+            let rate = shear_rate_per_s
+                .map(|r| {
+                    format!(
+                        ", apparent viscosity at {} 1/s",
+                        crate::units::significant(r)
+                    )
+                })
+                .unwrap_or_default();
+            format!("{} #{set}: {}{rate}", s::CHOICE, clean(model))
+        }
         Payload::Note { text } => format!("{}{at}: {}", super::strings::note::SUMMARY, clean(text)),
         Payload::Finding { text, .. } => format!("{}{at}: {}", s::FINDING, clean(text)),
         Payload::SessionEnd => s::SESSION_END.to_string(),
@@ -212,36 +237,31 @@ mod tests {
             pending: 0,
             error: error.map(str::to_string),
             closed: false,
+            records: Vec::new(),
         }
     }
 
     #[test]
-    fn an_entry_is_saved_only_once_the_writer_says_so() {
+    fn a_numbered_record_is_saved_only_once_the_writer_says_so() {
         let mut log = SessionLog::default();
-        let t = log.push(t0(), "Note: a".into());
-        assert_eq!(log.state(), JournalState::Unsaved(1));
-        log.apply(&reply(Some(t), Some(2), 1, Some("disk full")));
-        assert_eq!(log.status_of(t), Some(&EntryStatus::Unsaved));
-        assert!(matches!(
-            log.state(),
-            JournalState::Error { unsaved: 1, .. }
-        ));
-        // A later retry gets it onto the disk.
+        log.push(t0(), "Note: a".into());
+        assert!(log.sending());
+        log.apply(&reply(Some(1), Some(2), 1, Some("disk full")));
+        assert!(!log.sending());
+        assert_eq!(log.status_of_seq(2), EntryStatus::Unsaved);
         log.apply(&reply(None, None, 2, None));
-        assert_eq!(log.status_of(t), Some(&EntryStatus::Saved));
-        assert_eq!(log.state(), JournalState::Saved);
+        assert_eq!(log.status_of_seq(2), EntryStatus::Saved);
     }
 
     #[test]
-    fn a_refused_record_is_not_counted_as_waiting() {
+    fn a_refused_record_is_listed_with_its_reason_and_not_counted_as_waiting() {
         let mut log = SessionLog::default();
-        let t = log.push(t0(), "Note".into());
-        log.apply(&reply(Some(t), None, 1, Some("bad text")));
-        assert_eq!(
-            log.status_of(t),
-            Some(&EntryStatus::Refused("bad text".into()))
-        );
-        assert_eq!(log.unsaved(), 0);
+        log.push(t0(), "Note".into());
+        log.apply(&reply(Some(1), None, 1, Some("bad text")));
+        let rows = log.rows(&SessionState::default());
+        assert_eq!(rows.len(), 1);
+        assert_eq!(rows[0].status, EntryStatus::Refused("bad text".into()));
+        assert_eq!(log.unsaved(&SessionState::default()), 0);
     }
 
     #[test]

@@ -1,14 +1,15 @@
 //! Before the terminal is touched: load the site, open (or resume) the journal, build the
 //! app. After it is given back: one line on where the journal is.
 
+use super::EXIT_BAD_INPUT;
 use super::app::App;
 use super::ctx::{Ctx, Picks, SessionClock};
+use super::options::TuiOptions;
 use super::session_log::SessionLog;
-use super::session_log::summarize;
 use super::strings::{self, exit, status};
 use super::theme::{ColourMode, Glyphs, Theme};
-use crate::cli::{Cli, EXIT_BAD_INPUT};
-use crate::journal::{JournalWriter, NewSession, Payload, SystemClock};
+use crate::journal::{JournalWriter, NewSession, SystemClock};
+use crate::session::SessionState;
 use crate::site::Site;
 use anyhow::{Context as _, bail};
 use chrono::{DateTime, FixedOffset};
@@ -36,6 +37,7 @@ pub fn app_for(
         site,
         operator: operator.to_string(),
         picks: Picks::default(),
+        session: SessionState::default(),
         log: SessionLog::default(),
         clock: SessionClock { started: now, now },
         theme,
@@ -46,7 +48,7 @@ pub fn app_for(
 
 /// Load and open everything; `Ok(Err(code))` when the site config has errors (already
 /// printed, all of them, to stderr).
-pub fn prepare(cli: &Cli) -> anyhow::Result<Result<Start, ExitCode>> {
+pub fn prepare(cli: &TuiOptions) -> anyhow::Result<Result<Start, ExitCode>> {
     let (site, source) = match load_site(cli) {
         Ok(s) => s,
         Err(code) => return Ok(Err(code)),
@@ -69,22 +71,16 @@ pub fn prepare(cli: &Cli) -> anyhow::Result<Result<Start, ExitCode>> {
             site_source: source,
             operator: operator.clone(),
         };
-        let writer = JournalWriter::create(&new, Box::new(SystemClock))?;
+        let mut writer = JournalWriter::create(&new, Box::new(SystemClock))?;
         let path = writer
             .path()
             .map(|p| p.display().to_string())
             .unwrap_or_default();
-        let start = Payload::SessionStart {
-            site_id: site.id.clone(),
-            site_source: String::new(),
-        };
         let mut app = app_for(site, writer.operator(), theme, now, &path);
-        app.ctx
-            .log
-            .push_saved(writer.saved_through(), now, summarize(&start, None));
+        app.apply_saved(&writer.take_numbered());
         return Ok(Ok(Start { app, writer }));
     };
-    let resumed = JournalWriter::resume(resume, &operator, Box::new(SystemClock))
+    let mut resumed = JournalWriter::resume(resume, &operator, Box::new(SystemClock))
         .with_context(|| format!("cannot resume {}", resume.display()))?;
     let loaded = resumed.loaded;
     if let Some(id) = loaded.site_id()
@@ -100,6 +96,8 @@ pub fn prepare(cli: &Cli) -> anyhow::Result<Result<Start, ExitCode>> {
     let path = resume.display().to_string();
     let mut app = app_for(site, resumed.writer.operator(), theme, now, &path);
     app.resume_from(&loaded.records);
+    // Anything the journal wrote on resuming (after the loaded records) joins the state.
+    app.apply_saved(&resumed.writer.take_numbered());
     if let Some(torn) = &loaded.torn {
         app.set_status(format!("{}: {torn}", strings::journal::TORN));
     }
@@ -109,11 +107,11 @@ pub fn prepare(cli: &Cli) -> anyhow::Result<Result<Start, ExitCode>> {
     }))
 }
 
-fn load_site(cli: &Cli) -> Result<(Site, String), ExitCode> {
-    let loaded = match &cli.site {
-        Some(path) => crate::site::load_file(path).map(|s| (s, path.display().to_string())),
-        None => crate::site::demo().map(|s| (s, strings::DEMO_SITE_SOURCE.to_string())),
-    };
+fn load_site(cli: &TuiOptions) -> Result<(Site, String), ExitCode> {
+    let loaded = crate::site::load_or_demo(cli.site.as_deref()).map(|s| {
+        let source = s.source.clone();
+        (s, source)
+    });
     loaded.map_err(|errors| {
         eprintln!("{errors}");
         eprintln!("rheoside: the site config has errors; the screen UI was not started");
@@ -126,7 +124,7 @@ pub fn farewell(app: &App, signalled: bool) -> ExitCode {
     // After a hang-up the terminal is gone and writing to it fails; `println!` would panic
     // then, so the parting lines are best effort.
     use std::io::Write as _;
-    let unsaved = app.ctx.log.unsaved();
+    let unsaved = app.ctx.unsaved();
     if unsaved > 0 {
         let _ = writeln!(
             std::io::stderr(),

@@ -3,10 +3,9 @@
 //! not here: they are cleaned before they are drawn.
 
 /// Printed instead of drawing when stdout is not a terminal.
-pub const NOT_A_TERMINAL: &str = "rheoside: stdout is not a terminal, so the screen UI is not started; use a subcommand instead (rheoside --help)";
+pub const NOT_A_TERMINAL: &str = "rheoside: stdout is not a terminal, so the screens are not started; run it in a terminal, or use a subcommand (rheoside --help lists them)";
 
 pub const APP_NAME: &str = "rheoside";
-pub const DEMO_SITE_SOURCE: &str = "bundled demo site (invented)";
 
 /// Top bar.
 pub mod top {
@@ -192,15 +191,13 @@ pub mod curve {
     pub const COL_RPM: &str = "rpm";
     pub const COL_DIAL: &str = "dial";
     pub const COL_RATE: &str = "rate 1/s";
-    pub const COL_STRESS: &str = "stress Pa";
+    pub const COL_STRESS: &str = "stress";
     pub const COL_FLAGS: &str = "flags";
     pub const WARNINGS: &str = " Warnings ";
     pub const SET: &str = "Set";
     pub const SENDING: &str = "sending";
     pub const RATE_INVALID: &str = "shear rate";
-    pub const STRESS_UNIT: &str = "Pa";
-    pub const VISCOSITY_UNIT: &str = "Pa·s";
-    pub const RATE_UNIT: &str = "1/s";
+    pub const PM_IS_95: &str = "(± is the 95 % interval)";
     pub const AT: &str = "at";
 }
 
@@ -217,6 +214,7 @@ pub mod journal {
     pub const SESSION_END: &str = "Session ended";
     pub const READING: &str = "Reading";
     pub const RESULT: &str = "Result";
+    pub const CHOICE: &str = "Shown for set";
     pub const FINDING: &str = "Finding";
     pub const RESUMED: &str = "Resumed session";
     pub const TORN: &str = "A cut-off last line was set aside";

@@ -52,6 +52,8 @@ pub struct Marks {
     pub axis_corner: char,
     pub tick: char,
     pub plus_minus: &'static str,
+    /// Marks where text was cut to fit.
+    pub cut: char,
 }
 
 const ASCII_BORDER: border::Set<'static> = border::Set {
@@ -78,6 +80,7 @@ impl Marks {
                 axis_corner: '└',
                 tick: '┼',
                 plus_minus: "±",
+                cut: '…',
             },
             Glyphs::Ascii => Marks {
                 border: ASCII_BORDER,
@@ -89,6 +92,7 @@ impl Marks {
                 axis_corner: '+',
                 tick: '+',
                 plus_minus: "+/-",
+                cut: '~',
             },
         }
     }
@@ -97,6 +101,7 @@ impl Marks {
 /// Every style the screens use, by what it means.
 #[derive(Debug, Clone, Copy)]
 pub struct Theme {
+    pub glyphs: Glyphs,
     pub marks: Marks,
     pub base: Style,
     pub title: Style,
@@ -137,6 +142,7 @@ impl Theme {
         };
         let bold = Modifier::BOLD;
         Theme {
+            glyphs,
             marks: Marks::new(glyphs),
             base: Style::new(),
             title: c(Color::Cyan).add_modifier(bold),

@@ -1,7 +1,7 @@
 //! The journal on its own thread, so an fsync never freezes typing: the UI sends records,
 //! the thread appends and fsyncs them and answers with what is on disk.
 
-use crate::journal::{JournalWriter, Payload, Sink};
+use crate::journal::{JournalWriter, Payload, Record, Sink};
 use std::sync::mpsc::{self, Receiver, RecvTimeoutError, Sender};
 use std::thread::JoinHandle;
 use std::time::Duration;
@@ -38,6 +38,9 @@ pub struct Reply {
     pub error: Option<String>,
     /// The thread has finished; nothing more will come.
     pub closed: bool,
+    /// Records the journal numbered since the last reply, saved or not yet (compare their
+    /// `seq` with `saved_through`): the UI applies these to its live session state.
+    pub records: Vec<Record>,
 }
 
 /// The UI's end of the writer thread.
@@ -137,23 +140,23 @@ fn serve<S: Sink>(mut writer: JournalWriter<S>, jobs: &Receiver<Job>, replies: &
                 let before = writer.next_seq();
                 let result = writer.append(equipment.as_deref(), payload).map(|_| ());
                 let seq = (writer.next_seq() > before).then_some(before);
-                let _ = replies.send(reply(&writer, Some(ticket), seq, result));
+                let _ = replies.send(reply(&mut writer, Some(ticket), seq, result));
             }
             Ok(Job::Close) | Err(RecvTimeoutError::Disconnected) => break,
             Err(RecvTimeoutError::Timeout) => {
                 let result = writer.flush_pending().map(|_| ());
-                let _ = replies.send(reply(&writer, None, None, result));
+                let _ = replies.send(reply(&mut writer, None, None, result));
             }
         }
     }
     let result = writer.flush_pending().map(|_| ());
-    let mut last = reply(&writer, None, None, result);
+    let mut last = reply(&mut writer, None, None, result);
     last.closed = true;
     let _ = replies.send(last);
 }
 
 fn reply<S: Sink, E: std::fmt::Display>(
-    writer: &JournalWriter<S>,
+    writer: &mut JournalWriter<S>,
     ticket: Option<Ticket>,
     seq: Option<u64>,
     result: Result<(), E>,
@@ -165,6 +168,7 @@ fn reply<S: Sink, E: std::fmt::Display>(
         pending: writer.pending_count(),
         error: result.err().map(|e| e.to_string()),
         closed: false,
+        records: writer.take_numbered(),
     }
 }
 

@@ -79,6 +79,8 @@ fn payload(op: &Op) -> Option<(Option<String>, Payload)> {
             None,
             Payload::Result {
                 what: what.clone(),
+                result_kind: None,
+                from: Vec::new(),
                 data: serde_json::json!({ "n": n }),
             },
         ),

@@ -92,9 +92,11 @@ fn with_envelope<T>(e: &Entry<T>, item: Value) -> Value {
 
 fn set(site: &Site, e: &Entry<ViscometerSet>, s: &SessionState) -> Value {
     let v = &e.item;
-    let curve = v.curve.as_ref().ok();
+    let curve = v.shown().as_ref().ok();
     let product = site.product(&v.product);
-    let rate = product.map_or(crate::session::trend::DEFAULT_RATE_PER_S, spec_rate);
+    let spec = product.map_or(crate::session::trend::DEFAULT_RATE_PER_S, spec_rate);
+    let rate = v.shear_rate_per_s.unwrap_or(spec);
+    let curves = super::md_set::recomputed(v);
     let limits: Vec<Value> = match (product, curve) {
         (Some(p), Some(c)) => {
             check_limits(&p.limits, &at_reference(p, &c.fit.model, v.temperature_k).0)
@@ -107,7 +109,7 @@ fn set(site: &Site, e: &Entry<ViscometerSet>, s: &SessionState) -> Value {
     let seen: Vec<Value> = seen_for(e.seq, &s.sets, &s.results)
         .into_iter()
         .map(|r| {
-            let agreement = compare(&r.item.data, curve);
+            let agreement = compare(&r.item.data, &curves);
             let detail = match &agreement {
                 Agreement::Differs(why) => Some(why.clone()),
                 _ => None,
@@ -125,7 +127,8 @@ fn set(site: &Site, e: &Entry<ViscometerSet>, s: &SessionState) -> Value {
             "temperature_k": v.temperature_k,
             "rows": v.rows,
             "fit": curve.map(|c| fit_output::json(c, &FlowCurveOptions::default(), v.temperature_k)),
-            "fit_error": v.curve.as_ref().err().map(ToString::to_string),
+            "fit_error": v.shown().as_ref().err().map(ToString::to_string),
+            "chosen_by_hand": v.by_hand.is_some(),
             "apparent_viscosity": curve.map(|c| json!({
                 "shear_rate_per_s": rate,
                 "pa_s": finite(c.apparent_viscosity_at(rate)),

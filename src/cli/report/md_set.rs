@@ -3,25 +3,25 @@
 
 use super::md::{byline, cell};
 use super::seen::{Agreement, compare, seen_for, seen_text};
-use crate::cli::fit_output::param_text;
-use crate::cli::trend::text::{check_text, describe_limit, rate_text, value_text};
+use crate::present::limits::{check_text, describe_limit, rate_text, value_text};
+use crate::present::{self, Style};
 use crate::rheology::{Estimate, Fit};
 use crate::session::FlowCurve;
 use crate::session::state::{Entry, SessionState, ViscometerSet};
 use crate::session::trend::{LimitStatus, at_reference, check_limits, spec_rate};
 use crate::site::Site;
-use crate::units::{self, Dimension, UnitSystem};
+use crate::units::Dimension;
 use std::fmt::Write as _;
 
 pub(crate) fn set_section(site: &Site, e: &Entry<ViscometerSet>, s: &SessionState) -> String {
     let set = &e.item;
-    let system = site.unit_system;
+    let style = Style::new(site.unit_system, false);
     let mut out = format!(
         "\n#### Set at record {}: {} on {}, {}\n\n",
         e.seq,
         cell(&set.product),
         cell(&set.viscometer),
-        temperature(set, system)
+        temperature(set, style)
     );
     let _ = writeln!(out, "Recorded: {}.\n", byline(e));
     out.push_str("| row | rpm | dial |\n|---:|---:|---:|\n");
@@ -34,54 +34,55 @@ pub(crate) fn set_section(site: &Site, e: &Entry<ViscometerSet>, s: &SessionStat
             cell(&r.dial_raw)
         );
     }
-    match &set.curve {
+    match set.shown() {
         Ok(curve) => out.push_str(&curve_text(site, set, curve)),
         Err(why) => {
             let _ = writeln!(out, "\nNo flow curve: {}.", cell(&why.to_string()));
         }
     }
-    out.push_str(&seen(e, s, system));
+    out.push_str(&seen(e, s, style));
     out
 }
 
-fn temperature(set: &ViscometerSet, system: UnitSystem) -> String {
+fn temperature(set: &ViscometerSet, style: Style) -> String {
     match (set.temperature_k, &set.temperature_raw) {
-        (Some(k), _) => format!("at {}", units::format(k, Dimension::Temperature, system)),
+        (Some(k), _) => format!("at {}", present::quantity(k, Dimension::Temperature, style)),
         (None, Some(raw)) => format!("at {}", cell(raw)),
         (None, None) => "temperature not recorded".to_string(),
     }
 }
 
 fn curve_text(site: &Site, set: &ViscometerSet, curve: &FlowCurve) -> String {
-    let system = site.unit_system;
+    let style = Style::new(site.unit_system, false);
     let fit = &curve.fit;
     let mut out = format!(
         "\nFlow curve recomputed from these readings: **{}**. Why: {}\n\n",
         fit.model.kind().title(),
-        cell(&curve.reason)
+        cell(&present::reason::for_curve(curve, style))
     );
-    out.push_str("| parameter | value | 95 % confidence interval |\n|---|---:|---|\n");
+    out.push_str("| parameter | value ± 95 % interval |\n|---|---:|\n");
     for est in &fit.estimates {
-        out.push_str(&estimate_row(est, system));
+        out.push_str(&estimate_row(est, style));
     }
-    let _ = writeln!(out, "\n{}", quality(fit, system));
+    let _ = writeln!(out, "\n{}", quality(fit, style));
     let product = site.product(&set.product);
-    let rate = product.map_or(crate::session::trend::DEFAULT_RATE_PER_S, spec_rate);
+    let spec = product.map_or(crate::session::trend::DEFAULT_RATE_PER_S, spec_rate);
+    let rate = set.shear_rate_per_s.unwrap_or(spec);
     let _ = writeln!(
         out,
         "Apparent viscosity at {}: {}.",
         rate_text(rate),
-        units::format(
+        present::quantity(
             curve.apparent_viscosity_at(rate),
             Dimension::DynamicViscosity,
-            system
+            style
         )
     );
     for w in &curve.warnings {
         let _ = writeln!(out, "- Warning: {}", cell(w));
     }
     match product {
-        Some(p) => out.push_str(&limits(p, fit, set.temperature_k, system)),
+        Some(p) => out.push_str(&limits(p, fit, set.temperature_k, style)),
         None => {
             let _ = writeln!(
                 out,
@@ -93,34 +94,23 @@ fn curve_text(site: &Site, set: &ViscometerSet, curve: &FlowCurve) -> String {
     out
 }
 
-fn estimate_row(e: &Estimate, system: UnitSystem) -> String {
-    let ci = match e.ci95 {
-        Some((lo, hi)) => format!(
-            "{} to {}",
-            param_text(e.name, lo, system),
-            param_text(e.name, hi, system)
-        ),
-        None => format!(
-            "not available: {}",
-            e.no_ci.map_or("no interval", |w| w.explain())
-        ),
-    };
+fn estimate_row(e: &Estimate, style: Style) -> String {
     format!(
-        "| {} {} | {} | {ci} |\n",
-        e.name.symbol(),
+        "| {} {} | {} |\n",
+        present::symbol(e.name, style),
         e.name.label(),
-        param_text(e.name, e.value, system)
+        present::estimate(e, style)
     )
 }
 
-fn quality(fit: &Fit, system: UnitSystem) -> String {
+fn quality(fit: &Fit, style: Style) -> String {
     let aicc = fit
         .aicc
-        .map_or("not available".to_string(), |a| format!("{a:.2}"));
+        .map_or("not available".to_string(), present::reason::fmt_aicc);
     format!(
-        "Fit quality: R² {:.5}, RMSE {}, AICc {aicc}, degrees of freedom {}.",
-        fit.r_squared,
-        units::format(fit.rmse_pa, Dimension::Stress, system),
+        "Fit quality: R² {}, RMSE {}, AICc {aicc}, degrees of freedom {}.",
+        present::r_squared(fit.r_squared),
+        present::quantity(fit.rmse_pa, Dimension::Stress, style),
         fit.dof
     )
 }
@@ -129,13 +119,13 @@ fn limits(
     product: &crate::site::Product,
     fit: &Fit,
     temperature_k: Option<f64>,
-    system: UnitSystem,
+    style: Style,
 ) -> String {
     let (model, shifted_to) = at_reference(product, &fit.model, temperature_k);
     let basis = match shifted_to {
         Some(t) => format!(
             "K or the viscosity shifted to {} by the product's activation energy",
-            units::format(t, Dimension::Temperature, system)
+            present::quantity(t, Dimension::Temperature, style)
         ),
         None => "checked as measured, at the set's temperature".to_string(),
     };
@@ -146,28 +136,29 @@ fn limits(
     for c in check_limits(&product.limits, &model) {
         let verdict = match c.status {
             LimitStatus::Above | LimitStatus::Below => {
-                format!("**OUT**: {}", check_text(&c, system))
+                format!("**OUT**: {}", check_text(&c, style))
             }
             LimitStatus::Within => "within".to_string(),
-            LimitStatus::NotChecked => check_text(&c, system),
+            LimitStatus::NotChecked => check_text(&c, style),
         };
         let value = c.value.map_or(String::new(), |v| {
-            format!(" ({})", value_text(c.limit.property, v, system))
+            format!(" ({})", value_text(c.limit.property, v, style))
         });
         let _ = writeln!(
             out,
             "- {}: {verdict}{value}",
-            describe_limit(&c.limit, system)
+            describe_limit(&c.limit, style)
         );
     }
     out
 }
 
 /// What the journal says was shown at the time, against the recomputed fit.
-fn seen(e: &Entry<ViscometerSet>, s: &SessionState, system: UnitSystem) -> String {
+fn seen(e: &Entry<ViscometerSet>, s: &SessionState, style: Style) -> String {
     let mut out = String::new();
+    let curves = recomputed(&e.item);
     for r in seen_for(e.seq, &s.sets, &s.results) {
-        let agreement = match compare(&r.item.data, e.item.curve.as_ref().ok()) {
+        let agreement = match compare(&r.item.data, &curves) {
             Agreement::Same => "the same as recomputed".to_string(),
             Agreement::Differs(why) => {
                 format!("**differs** from the recomputed fit: {}", cell(&why))
@@ -178,8 +169,14 @@ fn seen(e: &Entry<ViscometerSet>, s: &SessionState, system: UnitSystem) -> Strin
             out,
             "\nSeen at the time ({}): {}; {agreement}.",
             byline(r),
-            cell(&seen_text(&r.item.data, system))
+            cell(&seen_text(&r.item.data, style))
         );
     }
     out
+}
+
+/// The set's recomputed curves: the rule's and, if one was picked, the hand-picked one.
+pub(crate) fn recomputed(set: &ViscometerSet) -> Vec<&FlowCurve> {
+    let hand = set.by_hand.as_ref().and_then(|c| c.as_ref().ok());
+    set.curve.as_ref().ok().into_iter().chain(hand).collect()
 }

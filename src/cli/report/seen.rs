@@ -1,15 +1,15 @@
 //! Results journalled at the time (what the operator saw), matched to their sets and
 //! compared with the fit recomputed from the journalled readings.
 //!
-//! A result belongs to a set when its data carries `"set_seq": N`, or, for a result whose
-//! `what` starts with `flow-curve`, when it is the first such result after the set. Its data
-//! is read as the `fit --json` object (`model`, `params`); anything else is shown as JSON.
+//! A result belongs to a set when it names the set's record in `from`. Journals written
+//! before results carried links (no `result_kind`) are matched the old way: `"set_seq": N`
+//! in the data, or the first `flow-curve…` result after the set. The data is read as the
+//! `fit --json` object (`model`, `params`); anything else is shown as JSON.
 
-use crate::cli::fit_output::param_text;
+use crate::present::{self, Style};
 use crate::rheology::ModelKind;
 use crate::session::FlowCurve;
 use crate::session::state::{Entry, SavedResult, ViscometerSet};
-use crate::units::UnitSystem;
 use serde_json::Value;
 
 /// Relative difference under which a saved parameter counts as the same number.
@@ -17,6 +17,21 @@ const SAME: f64 = 1e-6;
 
 /// The seq of the set a result belongs to, if any.
 pub(crate) fn linked_set(
+    result: &Entry<SavedResult>,
+    sets: &[Entry<ViscometerSet>],
+    results: &[Entry<SavedResult>],
+) -> Option<u64> {
+    if result.item.kind.is_some() {
+        return sets
+            .iter()
+            .find(|s| result.item.from.contains(&s.seq))
+            .map(|s| s.seq);
+    }
+    legacy_link(result, sets, results)
+}
+
+/// How results were matched before they named their inputs (journals of 0.1).
+fn legacy_link(
     result: &Entry<SavedResult>,
     sets: &[Entry<ViscometerSet>],
     results: &[Entry<SavedResult>],
@@ -30,6 +45,7 @@ pub(crate) fn linked_set(
     let set = sets.iter().rev().find(|s| s.seq < result.seq)?;
     let first_after = results
         .iter()
+        .filter(|r| r.item.kind.is_none())
         .filter(|r| r.seq > set.seq && r.item.what.starts_with("flow-curve"))
         .filter(|r| r.item.data.get("set_seq").is_none())
         .map(|r| r.seq)
@@ -68,8 +84,17 @@ impl Agreement {
     }
 }
 
-pub(crate) fn compare(data: &Value, curve: Option<&FlowCurve>) -> Agreement {
-    let (Some(model), Some(curve)) = (data.get("model").and_then(Value::as_str), curve) else {
+/// Compare a saved fit with the recomputed curve of the same model (the rule's, or the one
+/// picked by hand), or with the first curve when none has that model.
+pub(crate) fn compare(data: &Value, curves: &[&FlowCurve]) -> Agreement {
+    let Some(model) = data.get("model").and_then(Value::as_str) else {
+        return Agreement::NotComparable;
+    };
+    let same_model = curves
+        .iter()
+        .find(|c| c.fit.model.kind().name() == model)
+        .or(curves.first());
+    let Some(curve) = same_model else {
         return Agreement::NotComparable;
     };
     let now = curve.fit.model.kind();
@@ -98,7 +123,7 @@ pub(crate) fn compare(data: &Value, curve: Option<&FlowCurve>) -> Agreement {
 }
 
 /// "Herschel–Bulkley: τ0 3.46 Pa, K 9.89 Pa·sⁿ, n 0.3570", or the data as compact JSON.
-pub(crate) fn seen_text(data: &Value, system: UnitSystem) -> String {
+pub(crate) fn seen_text(data: &Value, style: Style) -> String {
     let model = data
         .get("model")
         .and_then(Value::as_str)
@@ -111,7 +136,11 @@ pub(crate) fn seen_text(data: &Value, system: UnitSystem) -> String {
                 .iter()
                 .filter_map(|p| {
                     let v = params.get(p.json_key())?.as_f64()?;
-                    Some(format!("{} {}", p.symbol(), param_text(*p, v, system)))
+                    Some(format!(
+                        "{} {}",
+                        present::symbol(*p, style),
+                        present::param_text(*p, v, style)
+                    ))
                 })
                 .collect();
             format!("{}: {}", kind.title(), shown.join(", "))

@@ -1,7 +1,7 @@
 //! The `trend` chart: apparent viscosity per session as ASCII columns with the limit lines,
 //! so it reads the same over any SSH link or terminal font.
 
-use super::text::rate_text;
+use crate::present::limits::rate_text;
 use crate::session::trend::{SessionPoint, Trend};
 use crate::site::{LimitProperty, Product};
 use crate::units::{self, Dimension, UnitSystem};

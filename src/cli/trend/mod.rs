@@ -7,7 +7,7 @@ use super::args::{Cli, TrendArgs};
 mod chart;
 mod print;
 mod scan;
-pub(super) mod text;
+
 use crate::session::trend::{TrendBuilder, find_product, parse_since};
 use crate::site::Site;
 use std::path::PathBuf;
@@ -35,9 +35,6 @@ pub fn run(cli: &Cli, args: &TrendArgs) -> anyhow::Result<ExitCode> {
 
 /// The site from `--site`, else the bundled demo (an invented plant).
 pub(super) fn site_or_demo(cli: &Cli) -> anyhow::Result<Site> {
-    let loaded = match &cli.site {
-        Some(path) => crate::site::load_file(path),
-        None => crate::site::demo(),
-    };
-    loaded.map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}"))
+    crate::site::load_or_demo(cli.site.as_deref())
+        .map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}"))
 }

@@ -1,7 +1,8 @@
 //! The `trend` table: one row per session, out-of-limit sessions marked in words.
 
 use super::scan::ScanCounts;
-use super::text::{describe_limits, out_text, param_cell, rate_text, unchecked_text};
+use crate::present::Style;
+use crate::present::limits::{describe_limits, out_text, param_cell, rate_text, unchecked_text};
 use crate::rheology::{ModelKind, ParamName};
 use crate::session::trend::{Constants, SessionPoint, Trend};
 use crate::site::{Product, Site};
@@ -31,7 +32,7 @@ pub fn heading(site: &Site, product: &Product, trend: &Trend, since_text: &str) 
     let _ = writeln!(
         out,
         "Spec limits: {}",
-        describe_limits(&product.limits, system)
+        describe_limits(&product.limits, Style::new(system, false))
     );
     out
 }
@@ -93,20 +94,20 @@ fn row(p: &SessionPoint, system: UnitSystem) -> String {
 }
 
 fn fitted_row(when: &str, operator: &str, c: &Constants, system: UnitSystem) -> String {
-    let out = out_text(&c.checks, system);
+    let out = out_text(&c.checks, Style::new(system, false));
     let mark = if out.is_some() { "OUT" } else { "" };
     let mut line = format!(
         "{mark:<3} {when:<16} {operator:<12} {:<7} {:<8} {:<13} {:<6} {}\n",
         model_short(c.model.kind()),
-        param_cell(ParamName::Tau0, c.tau0, system),
-        param_cell(ParamName::K, c.k, system),
-        param_cell(ParamName::N, c.n, system),
+        param_cell(ParamName::Tau0, c.tau0, Style::new(system, false)),
+        param_cell(ParamName::K, c.k, Style::new(system, false)),
+        param_cell(ParamName::N, c.n, Style::new(system, false)),
         units::format(c.mu_a_pa_s, Dimension::DynamicViscosity, system),
     );
     if let Some(text) = out {
         let _ = writeln!(line, "      {text}");
     }
-    if let Some(text) = unchecked_text(&c.checks, system) {
+    if let Some(text) = unchecked_text(&c.checks, Style::new(system, false)) {
         let _ = writeln!(line, "      {text}");
     }
     line

@@ -1,15 +1,22 @@
-//! The Flow curve view: the last saved set's shear stress against shear rate on log axes,
-//! the fitted model with its constants ± 95 % CI, fit quality, why that model, and the
-//! apparent viscosity at a shear rate the operator types. The model can be switched by hand.
+//! The Flow curve view: the session's newest set, shear stress against shear rate on log
+//! axes, the model shown with its constants ± 95 % interval, fit quality, why that model,
+//! and the apparent viscosity at a shear rate the operator types.
 //!
-//! The fit runs when the set or the model changes, never while drawing.
+//! Everything comes from the live session state: the set and its curve (fitted once when
+//! the set was applied), the model picked by hand and the shear rate chosen (both journalled
+//! as `choice` records, so a replay shows the same). The view keeps only what it derives
+//! for drawing (the chart's points and samples) and the rate being typed.
 
 use super::curve_panel;
-use super::{Effect, SavedSet, SessionEvent, View, ViewId};
+use super::{Draft, Effect, View, ViewId};
+use crate::journal::Payload;
+use crate::present::Style;
 use crate::rheology::ModelKind;
-use crate::session::{FlowCurve, FlowCurveInput, FlowCurveOptions, ModelPick, analyse};
+use crate::session::state::{Entry, ViscometerSet};
+use crate::session::{FlowCurve, ModelPick};
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::Action;
+use crate::tui::session_log::summarize;
 use crate::tui::widgets::editing::{self, EditStep};
 use crate::tui::widgets::field::{Field, FieldKind};
 use crate::tui::widgets::log_axis::LogRange;
@@ -17,7 +24,6 @@ use crate::tui::widgets::log_chart::Mark;
 use crate::units::Dimension;
 use ratatui::Frame;
 use ratatui::layout::Rect;
-use std::sync::Arc;
 
 /// The model choices in the order `m` steps through them.
 const PICKS: [ModelPick; 6] = [
@@ -31,26 +37,26 @@ const PICKS: [ModelPick; 6] = [
 
 /// Samples along the fitted curve: more than the widest chart has columns.
 const CURVE_SAMPLES: usize = 240;
-/// The shear rate the apparent viscosity is first shown at, 1/s (a mid-range pipe rate;
-/// common practice, no source).
+/// The shear rate the apparent viscosity is first shown at when the product has no limit at
+/// a rate of its own, 1/s (a mid-range pipe rate; common practice, no source).
 const DEFAULT_RATE: &str = "100";
 
-/// A fitted set, with everything the chart needs already worked out.
+/// The chart of one set's shown curve, worked out when the state changes.
 pub struct Shown {
-    pub curve: FlowCurve,
+    /// The set's record number and the model pick this chart is of.
+    pub seq: u64,
+    pub pick: ModelPick,
     pub marks: Vec<Mark>,
     pub samples: Vec<(f64, f64)>,
     pub x: LogRange,
     pub y: LogRange,
+    /// The stress axis's unit (the site's); marks and samples are in it.
+    pub y_unit: String,
 }
 
 pub struct CurveView {
-    set: Option<Arc<SavedSet>>,
-    ticket: Option<u64>,
-    pick: ModelPick,
-    result: Option<Result<Shown, String>>,
+    chart: Option<Shown>,
     rate: Field,
-    apparent: Option<f64>,
     editing: bool,
 }
 
@@ -63,86 +69,102 @@ impl Default for CurveView {
 impl CurveView {
     pub fn new() -> CurveView {
         CurveView {
-            set: None,
-            ticket: None,
-            pick: ModelPick::Auto,
-            result: None,
+            chart: None,
             rate: Field::with_text(FieldKind::Positive(Dimension::ShearRate), DEFAULT_RATE),
-            apparent: None,
             editing: false,
         }
     }
 
-    /// Show a set (a new one, or the last one of a resumed journal).
-    pub fn show_set(&mut self, set: Arc<SavedSet>, ticket: Option<u64>) {
-        self.set = Some(set);
-        self.ticket = ticket;
-        self.recompute();
+    /// The chart drawn, for tests.
+    pub fn chart(&self) -> Option<&Shown> {
+        self.chart.as_ref()
     }
 
-    fn recompute(&mut self) {
-        self.result = self.set.as_ref().map(|set| fit_set(set, self.pick));
-        self.update_apparent();
-    }
-
-    fn update_apparent(&mut self) {
-        let fitted = self.result.as_ref().and_then(|r| r.as_ref().ok());
-        self.apparent = match (fitted, self.rate.value()) {
-            (Some(shown), Some(rate)) => Some(shown.curve.apparent_viscosity_at(rate)),
-            _ => None,
-        };
-    }
-
-    fn step_model(&mut self, step: isize) {
-        let at = PICKS.iter().position(|p| *p == self.pick).unwrap_or(0) as isize;
-        self.pick = PICKS[(at + step).rem_euclid(PICKS.len() as isize) as usize];
-        self.recompute();
-    }
-
-    fn handle_editing(&mut self, action: Action) {
-        match editing::apply(&mut self.rate, action) {
-            EditStep::Typing => {}
-            EditStep::Cancelled | EditStep::Accepted(_) => self.editing = false,
+    /// The shear rate the apparent viscosity is read at: the one being typed, else the one
+    /// chosen for the set, else the field's text.
+    fn rate_now(&self, set: &ViscometerSet) -> Option<f64> {
+        if self.editing {
+            return self.rate.value();
         }
-        self.update_apparent();
+        set.shear_rate_per_s.or(self.rate.value())
     }
 
-    pub fn result(&self) -> Option<&Result<Shown, String>> {
-        self.result.as_ref()
+    fn handle_editing(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
+        match editing::apply(&mut self.rate, action) {
+            EditStep::Typing => Vec::new(),
+            EditStep::Cancelled => {
+                self.editing = false;
+                Vec::new()
+            }
+            EditStep::Accepted(_) => {
+                self.editing = false;
+                let Some(entry) = ctx.session.latest_set() else {
+                    return Vec::new();
+                };
+                match self.rate.value() {
+                    Some(rate) => vec![choice(entry, entry.item.pick, Some(rate))],
+                    None => Vec::new(),
+                }
+            }
+        }
+    }
+
+    fn step_model(&self, ctx: &Ctx, step: isize) -> Vec<Effect> {
+        let Some(entry) = ctx.session.latest_set() else {
+            return Vec::new();
+        };
+        let at = PICKS
+            .iter()
+            .position(|p| *p == entry.item.pick)
+            .unwrap_or(0) as isize;
+        let next = PICKS[(at + step).rem_euclid(PICKS.len() as isize) as usize];
+        vec![choice(entry, next, self.rate_now(&entry.item))]
     }
 }
 
-/// Fit a set and lay out its chart data.
-fn fit_set(set: &SavedSet, pick: ModelPick) -> Result<Shown, String> {
-    let opts = FlowCurveOptions {
-        model: pick,
-        ..FlowCurveOptions::default()
+/// A `choice` record: what is to be shown for the set.
+fn choice(entry: &Entry<ViscometerSet>, pick: ModelPick, rate: Option<f64>) -> Effect {
+    let payload = Payload::Choice {
+        set: entry.seq,
+        model: pick.name().to_string(),
+        shear_rate_per_s: rate,
     };
-    let input = FlowCurveInput::Dial {
-        geometry: &set.geometry,
-        readings: &set.readings,
-    };
-    let curve = analyse(input, &opts).map_err(|e| e.to_string())?;
+    Effect::Journal(Draft {
+        summary: summarize(&payload, entry.equipment.as_deref()),
+        equipment: entry.equipment.clone(),
+        payload,
+    })
+}
+
+/// Lay out a curve's chart data, stresses in the site's stress unit.
+fn chart_of(seq: u64, pick: ModelPick, curve: &FlowCurve, style: Style) -> Shown {
+    let y_unit = crate::units::display_unit(Dimension::Stress, style.system);
+    let to_unit = |pa: f64| crate::units::from_si(pa, y_unit, Dimension::Stress).unwrap_or(pa);
     let marks: Vec<Mark> = curve
         .points
         .iter()
         .map(|p| Mark {
             x: p.shear_rate_per_s,
-            y: p.shear_stress_pa,
+            y: to_unit(p.shear_stress_pa),
             flagged: !p.flags.is_empty(),
         })
         .collect();
     let fallback = LogRange { lo: 0.0, hi: 1.0 };
     let x = LogRange::covering(marks.iter().map(|m| m.x)).unwrap_or(fallback);
     let y = LogRange::covering(marks.iter().map(|m| m.y)).unwrap_or(fallback);
-    let samples = sample_curve(&curve, x);
-    Ok(Shown {
-        curve,
+    let samples = sample_curve(curve, x)
+        .into_iter()
+        .map(|(rate, pa)| (rate, to_unit(pa)))
+        .collect();
+    Shown {
+        seq,
+        pick,
         marks,
         samples,
         x,
         y,
-    })
+        y_unit: style.text(y_unit),
+    }
 }
 
 /// The model's stress at rates spread evenly in log space across the x axis.
@@ -163,49 +185,67 @@ impl View for CurveView {
         ViewId::Curve
     }
 
-    fn handle(&mut self, action: Action, _ctx: &Ctx) -> Vec<Effect> {
+    fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         if self.editing {
-            self.handle_editing(action);
-            return Vec::new();
+            return self.handle_editing(action, ctx);
         }
         match action {
-            Action::NextModel | Action::Right => self.step_model(1),
-            Action::PrevModel | Action::Left => self.step_model(-1),
-            Action::AutoModel => {
-                self.pick = ModelPick::Auto;
-                self.recompute();
-            }
+            Action::NextModel | Action::Right => self.step_model(ctx, 1),
+            Action::PrevModel | Action::Left => self.step_model(ctx, -1),
+            Action::AutoModel => match ctx.session.latest_set() {
+                Some(e) => vec![choice(e, ModelPick::Auto, self.rate_now(&e.item))],
+                None => Vec::new(),
+            },
             // A new rate is typed from scratch (Esc brings the old one back).
             Action::Activate => {
                 self.rate.begin_edit();
                 self.rate.clear();
                 self.editing = true;
-                self.update_apparent();
+                Vec::new()
             }
             Action::Type(c) => {
                 editing::start_with(&mut self.rate, c);
                 self.editing = true;
-                self.update_apparent();
+                Vec::new()
             }
-            _ => {}
+            _ => Vec::new(),
         }
-        Vec::new()
     }
 
-    fn on_event(&mut self, event: &SessionEvent, _ctx: &Ctx) {
-        match event {
-            SessionEvent::SetSaved { set, ticket } => self.show_set(Arc::clone(set), *ticket),
+    fn refresh(&mut self, ctx: &Ctx) {
+        let Some(entry) = ctx.session.latest_set() else {
+            self.chart = None;
+            return;
+        };
+        let pick = entry.item.pick;
+        if self
+            .chart
+            .as_ref()
+            .is_some_and(|c| c.seq == entry.seq && c.pick == pick)
+        {
+            return;
+        }
+        self.chart = entry
+            .item
+            .shown()
+            .as_ref()
+            .ok()
+            .map(|curve| chart_of(entry.seq, pick, curve, ctx.style()));
+        if let Some(rate) = entry.item.shear_rate_per_s {
+            self.rate = Field::with_text(
+                FieldKind::Positive(Dimension::ShearRate),
+                &crate::units::significant(rate),
+            );
         }
     }
 
     fn render(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
+        let entry = ctx.session.latest_set();
         let view = curve_panel::CurveScreen {
-            set: self.set.as_deref(),
-            ticket: self.ticket,
-            pick: self.pick,
-            result: self.result.as_ref(),
+            entry,
+            chart: self.chart.as_ref(),
             rate: &self.rate,
-            apparent: self.apparent,
+            apparent_at: entry.and_then(|e| self.rate_now(&e.item)),
             editing: self.editing,
         };
         view.draw(frame, area, ctx);

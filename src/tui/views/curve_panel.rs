@@ -2,10 +2,11 @@
 //! (constants ± 95 % CI, R², RMSE, the reason, apparent viscosity) on the right, and a
 //! table of the points when the screen is tall enough.
 
-use super::SavedSet;
 use super::curve::Shown;
-use crate::rheology::{Estimate, Fit};
-use crate::session::ModelPick;
+use crate::present::{self, Style};
+use crate::rheology::Fit;
+use crate::session::state::{Entry, ViscometerSet};
+use crate::session::{FlowCurve, ModelPick};
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
 use crate::tui::session_log::EntryStatus;
@@ -13,7 +14,7 @@ use crate::tui::strings::{curve as s, journal as js};
 use crate::tui::theme::Theme;
 use crate::tui::widgets::field::Field;
 use crate::tui::widgets::log_chart::LogChart;
-use crate::units::significant;
+use crate::units::Dimension;
 use ratatui::Frame;
 use ratatui::layout::{Constraint, Layout, Rect};
 use ratatui::text::{Line, Span};
@@ -25,12 +26,13 @@ const PANEL_W: u16 = 38;
 const TALL_ENOUGH_FOR_TABLE: u16 = 30;
 
 pub struct CurveScreen<'a> {
-    pub set: Option<&'a SavedSet>,
-    pub ticket: Option<u64>,
-    pub pick: ModelPick,
-    pub result: Option<&'a Result<Shown, String>>,
+    /// The newest set of the session, with its curve.
+    pub entry: Option<&'a Entry<ViscometerSet>>,
+    /// Its chart, laid out when the state changed.
+    pub chart: Option<&'a Shown>,
     pub rate: &'a Field,
-    pub apparent: Option<f64>,
+    /// The shear rate the apparent viscosity is shown at.
+    pub apparent_at: Option<f64>,
     pub editing: bool,
 }
 
@@ -40,19 +42,18 @@ impl CurveScreen<'_> {
             Layout::horizontal([Constraint::Min(0), Constraint::Length(PANEL_W)]).areas(area);
         self.draw_panel(frame, right, ctx);
         let t = &ctx.theme;
-        let shown = match self.result {
-            Some(Ok(shown)) => shown,
+        let curve = match self.entry.map(|e| e.item.shown()) {
+            Some(Ok(curve)) => curve,
             Some(Err(e)) => {
-                return draw_message(
-                    frame,
-                    left,
-                    &format!("{}: {}", s::FIT_FAILED, sanitize(e, false)),
-                    t,
-                );
+                let text = format!("{}: {}", s::FIT_FAILED, sanitize(&e.to_string(), false));
+                return draw_message(frame, left, &ctx.style().text(&text), t);
             }
             None => return draw_message(frame, left, s::NO_SET, t),
         };
-        let warn_h = warnings_height(&shown.curve.warnings, left);
+        let Some(shown) = self.chart else {
+            return draw_message(frame, left, s::NO_SET, t);
+        };
+        let warn_h = warnings_height(&curve.warnings, left);
         let table_h = if area.height >= TALL_ENOUGH_FOR_TABLE {
             shown.marks.len() as u16 + 3
         } else {
@@ -66,14 +67,14 @@ impl CurveScreen<'_> {
         .areas(left);
         draw_chart(frame, chart, shown, t);
         if table_h > 0 {
-            draw_points(frame, table, shown, t);
+            draw_points(frame, table, curve, ctx.style(), t);
         }
         if warn_h > 0 {
-            let text: Vec<Line> = shown
-                .curve
+            let style = ctx.style();
+            let text: Vec<Line> = curve
                 .warnings
                 .iter()
-                .map(|w| Line::raw(format!("! {}", sanitize(w, false))))
+                .map(|w| Line::raw(style.text(&format!("! {}", sanitize(w, false)))))
                 .collect();
             let para = Paragraph::new(text)
                 .style(t.warn)
@@ -91,71 +92,43 @@ impl CurveScreen<'_> {
         let [text_area, rate_area] =
             Layout::vertical([Constraint::Min(0), Constraint::Length(2)]).areas(inner);
         let mut lines = vec![self.set_line(ctx)];
-        if let Some(Ok(shown)) = self.result {
-            lines.extend(self.fit_lines(&shown.curve.fit, &shown.curve.reason, t));
+        if let Some(e) = self.entry
+            && let Ok(curve) = e.item.shown()
+        {
+            lines.extend(fit_lines(curve, e.item.pick, ctx.style(), t));
         }
         frame.render_widget(Paragraph::new(lines).wrap(Wrap { trim: false }), text_area);
-        self.draw_rate(frame, rate_area, t);
+        self.draw_rate(frame, rate_area, ctx);
     }
 
     fn set_line(&self, ctx: &Ctx) -> Line<'static> {
         let t = &ctx.theme;
-        let Some(set) = self.set else {
+        let Some(entry) = self.entry else {
             return Line::styled(s::NO_SET, t.dim);
         };
-        let status = match self.ticket.and_then(|k| ctx.log.status_of(k)) {
-            None | Some(EntryStatus::Saved) => Span::styled(js::SAVED, t.ok),
-            Some(EntryStatus::Sending) => Span::styled(js::SENDING, t.warn),
-            Some(EntryStatus::Unsaved) => Span::styled(js::UNSAVED, t.error),
-            Some(EntryStatus::Refused(_)) => Span::styled(js::REFUSED, t.error),
+        let status = match ctx.log.status_of_seq(entry.seq) {
+            EntryStatus::Saved => Span::styled(js::SAVED, t.ok),
+            _ => Span::styled(js::UNSAVED, t.error),
         };
+        let set = &entry.item;
         let temp = set
-            .temperature_text
-            .as_deref()
-            .map(|x| format!(", {}", sanitize(x, false)))
+            .temperature_k
+            .map(|k| {
+                format!(
+                    ", {}",
+                    present::quantity(k, Dimension::Temperature, ctx.style())
+                )
+            })
             .unwrap_or_default();
         Line::from(vec![
-            Span::styled(format!("{}  ", s::SET), t.dim),
+            Span::styled(format!("{} #{}  ", s::SET, entry.seq), t.dim),
             Span::raw(format!("{}{temp}  ", sanitize(&set.product, false))),
             status,
         ])
     }
 
-    fn fit_lines(&self, fit: &Fit, reason: &str, t: &Theme) -> Vec<Line<'static>> {
-        let how = match self.pick {
-            ModelPick::Auto => s::AUTO,
-            ModelPick::Fixed(_) => s::BY_HAND,
-        };
-        let mut lines = vec![Line::from(vec![
-            Span::styled(fit.model.kind().title().to_string(), t.title),
-            Span::styled(format!(" ({how})"), t.dim),
-        ])];
-        for e in &fit.estimates {
-            lines.push(Line::styled(
-                format!("{} {}", e.name.symbol(), e.name.label()),
-                t.dim,
-            ));
-            lines.push(Line::raw(format!(
-                "   {}",
-                estimate_text(e, t.marks.plus_minus)
-            )));
-        }
-        lines.push(Line::raw(format!(
-            "{} {:.4}   {} {} {}",
-            s::R2,
-            fit.r_squared,
-            s::RMSE,
-            significant(fit.rmse_pa),
-            s::STRESS_UNIT
-        )));
-        lines.push(Line::from(vec![
-            Span::styled(format!("{}: ", s::WHY), t.dim),
-            Span::raw(sanitize(reason, false)),
-        ]));
-        lines
-    }
-
-    fn draw_rate(&self, frame: &mut Frame, area: Rect, t: &Theme) {
+    fn draw_rate(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
+        let t = &ctx.theme;
         if area.height < 2 {
             return;
         }
@@ -182,42 +155,59 @@ impl CurveScreen<'_> {
             width: value.width.saturating_sub(11),
             ..value
         };
-        let text = match (self.rate.error(), self.apparent, self.rate.value()) {
+        let curve = self.entry.and_then(|e| e.item.shown().as_ref().ok());
+        let text = match (self.rate.error(), curve, self.apparent_at) {
             (Some(_), _, _) => Span::styled(format!("! {}?", s::RATE_INVALID), t.error),
-            (None, Some(mu), Some(rate)) => Span::styled(
-                format!(
-                    "= {} {} {} {} {}",
-                    significant(mu),
-                    s::VISCOSITY_UNIT,
-                    s::AT,
-                    significant(rate),
-                    s::RATE_UNIT
-                ),
-                t.ok,
-            ),
+            (None, Some(curve), Some(rate)) => {
+                let style = ctx.style();
+                let mu = curve.apparent_viscosity_at(rate);
+                Span::styled(
+                    format!(
+                        "= {} {} {}",
+                        present::quantity(mu, Dimension::DynamicViscosity, style),
+                        s::AT,
+                        present::quantity(rate, Dimension::ShearRate, style),
+                    ),
+                    t.ok,
+                )
+            }
             _ => Span::raw(""),
         };
         frame.render_widget(Paragraph::new(Line::from(text)), rest);
     }
 }
 
-/// "5.02 ± 0.194 Pa", or the value with why it has no interval.
-pub fn estimate_text(e: &Estimate, pm: &str) -> String {
-    let unit = e.name.unit();
-    let unit = if unit.is_empty() {
-        String::new()
-    } else {
-        format!(" {unit}")
+/// The model panel's lines: the model, each constant ± its 95 % interval, fit quality, why.
+fn fit_lines(curve: &FlowCurve, pick: ModelPick, style: Style, t: &Theme) -> Vec<Line<'static>> {
+    let fit: &Fit = &curve.fit;
+    let how = match pick {
+        ModelPick::Auto => s::AUTO,
+        ModelPick::Fixed(_) => s::BY_HAND,
     };
-    match (e.ci95, e.no_ci) {
-        (Some((lo, hi)), _) => format!(
-            "{} {pm} {}{unit}",
-            significant(e.value),
-            significant((hi - lo) / 2.0)
-        ),
-        (None, Some(why)) => format!("{}{unit} ({}: {why})", significant(e.value), s::NO_CI),
-        (None, None) => format!("{}{unit}", significant(e.value)),
+    let mut lines = vec![Line::from(vec![
+        Span::styled(style.text(fit.model.kind().title()), t.title),
+        Span::styled(format!(" ({how})"), t.dim),
+    ])];
+    for e in &fit.estimates {
+        lines.push(Line::styled(
+            format!("{} {}", present::symbol(e.name, style), e.name.label()),
+            t.dim,
+        ));
+        lines.push(Line::raw(format!("   {}", present::estimate(e, style))));
     }
+    lines.push(Line::styled(style.text(s::PM_IS_95), t.dim));
+    lines.push(Line::raw(style.text(&format!(
+        "{} {}   {} {}",
+        s::R2,
+        present::r_squared(fit.r_squared),
+        s::RMSE,
+        present::quantity(fit.rmse_pa, Dimension::Stress, style)
+    ))));
+    lines.push(Line::from(vec![
+        Span::styled(format!("{}: ", s::WHY), t.dim),
+        Span::raw(sanitize(&present::reason::for_curve(curve, style), false)),
+    ]));
+    lines
 }
 
 fn draw_message(frame: &mut Frame, area: Rect, text: &str, t: &Theme) {
@@ -261,30 +251,38 @@ fn draw_chart(frame: &mut Frame, area: Rect, shown: &Shown, t: &Theme) {
         curve: &shown.samples,
         x: shown.x,
         y: shown.y,
-        y_unit: s::STRESS_UNIT,
+        y_unit: &shown.y_unit,
         theme: t,
     };
     frame.render_widget(chart, inner);
 }
 
-fn draw_points(frame: &mut Frame, area: Rect, shown: &Shown, t: &Theme) {
+fn draw_points(frame: &mut Frame, area: Rect, curve: &FlowCurve, style: Style, t: &Theme) {
     let header = format!(
         "{:>6} {:>6} {:>9} {:>9}  {}",
         s::COL_RPM,
         s::COL_DIAL,
         s::COL_RATE,
-        s::COL_STRESS,
+        format!(
+            "{} {}",
+            s::COL_STRESS,
+            crate::units::display_unit(Dimension::Stress, style.system)
+        ),
         s::COL_FLAGS
     );
     let mut lines = vec![Line::styled(header, t.dim)];
-    for p in &shown.curve.points {
-        let opt = |v: Option<f64>| v.map(significant).unwrap_or_default();
+    let number = |si: f64, dim| {
+        let shown = present::quantity(si, dim, style);
+        shown.split(' ').next().unwrap_or_default().to_string()
+    };
+    for p in &curve.points {
+        let opt = |v: Option<f64>| v.map(crate::units::significant).unwrap_or_default();
         lines.push(Line::raw(format!(
             "{:>6} {:>6} {:>9} {:>9}  {}",
             opt(p.rpm),
             opt(p.dial),
-            significant(p.shear_rate_per_s),
-            significant(p.shear_stress_pa),
+            number(p.shear_rate_per_s, Dimension::ShearRate),
+            number(p.shear_stress_pa, Dimension::Stress),
             p.flags.join(", ")
         )));
     }

@@ -26,7 +26,7 @@ pub struct JournalView {
 
 impl JournalView {
     fn scroll(&mut self, ctx: &Ctx, by: isize) {
-        let len = ctx.log.entries().len();
+        let len = ctx.session.log.len();
         let from = self.top.unwrap_or(len.saturating_sub(PAGE));
         let to = (from as isize + by).clamp(0, len.saturating_sub(1) as isize) as usize;
         self.top = Some(to);
@@ -42,7 +42,7 @@ fn status_span(status: &EntryStatus, t: &Theme) -> Span<'static> {
     }
 }
 
-fn entry_line(e: &Entry, t: &Theme) -> Line<'static> {
+fn entry_line(e: &Entry, t: &Theme, style: crate::present::Style) -> Line<'static> {
     let seq = e
         .seq
         .map(|n| format!("#{n}"))
@@ -51,7 +51,7 @@ fn entry_line(e: &Entry, t: &Theme) -> Line<'static> {
         Span::styled(e.time.format("%H:%M:%S  ").to_string(), t.dim),
         Span::styled(format!("{seq:<5}"), t.dim),
         status_span(&e.status, t),
-        Span::raw(sanitize(&e.summary, false)),
+        Span::raw(style.text(&sanitize(&e.summary, false))),
     ];
     if let EntryStatus::Refused(why) = &e.status {
         spans.push(Span::styled(
@@ -83,12 +83,12 @@ impl View for JournalView {
     fn render(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
         let t = &ctx.theme;
         let room = usize::from(area.width).saturating_sub(s::TITLE.len() + s::FILE.len() + 6);
-        let path = clip_start(&sanitize(&ctx.journal_path, false), room);
+        let path = clip_start(&sanitize(&ctx.journal_path, false), room, t.marks.cut);
         let title = format!("{}({} {path}) ", s::TITLE, s::FILE);
         let block = t.panel(title);
         let inner = block.inner(area);
         frame.render_widget(block, area);
-        let entries = ctx.log.entries();
+        let entries = ctx.log.rows(&ctx.session);
         if entries.is_empty() {
             frame.render_widget(Paragraph::new(s::EMPTY).style(t.dim), inner);
             return;
@@ -102,7 +102,7 @@ impl View for JournalView {
             .iter()
             .skip(top)
             .take(height)
-            .map(|e| entry_line(e, t))
+            .map(|e| entry_line(e, t, ctx.style()))
             .collect();
         frame.render_widget(Paragraph::new(lines), inner);
     }

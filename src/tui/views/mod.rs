@@ -13,11 +13,9 @@ mod site;
 use super::ctx::Ctx;
 use super::keymap::Action;
 use super::strings::{caution, views as names};
-use crate::instrument::{DialReading, Geometry};
 use crate::journal::Payload;
 use ratatui::Frame;
 use ratatui::layout::Rect;
-use std::sync::Arc;
 
 pub use curve::CurveView;
 pub use journal::JournalView;
@@ -54,16 +52,6 @@ impl ViewId {
     }
 }
 
-/// A viscometer set as saved: what the flow curve is computed from.
-#[derive(Debug, Clone, PartialEq)]
-pub struct SavedSet {
-    pub viscometer: String,
-    pub geometry: Geometry,
-    pub product: String,
-    pub temperature_text: Option<String>,
-    pub readings: Vec<DialReading>,
-}
-
 /// A record for the journal, with the line the Journal view shows for it.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Draft {
@@ -80,22 +68,7 @@ pub enum Effect {
     PickEquipment(String),
     PickProduct(String),
     Journal(Draft),
-    /// Journal a set (its records) and tell every view about it.
-    SaveSet {
-        drafts: Vec<Draft>,
-        set: Arc<SavedSet>,
-    },
     Show(ViewId),
-}
-
-/// Something that happened in the session, told to every view.
-#[derive(Debug, Clone)]
-pub enum SessionEvent {
-    /// A set was sent to the journal under this ticket.
-    SetSaved {
-        set: Arc<SavedSet>,
-        ticket: Option<u64>,
-    },
 }
 
 /// One screen of the UI. Each view owns its own state (cursors, fields, results).
@@ -105,8 +78,9 @@ pub trait View {
     /// React to a key; anything outside the view's own state is returned as effects.
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect>;
 
-    /// Hear about the session (a set saved elsewhere, a resume).
-    fn on_event(&mut self, _event: &SessionEvent, _ctx: &Ctx) {}
+    /// The live session state changed (records applied): bring anything derived from it up
+    /// to date here, so drawing stays free of computation.
+    fn refresh(&mut self, _ctx: &Ctx) {}
 
     /// Draw from state only: no I/O, no fitting.
     fn render(&self, frame: &mut Frame, area: Rect, ctx: &Ctx);

@@ -3,13 +3,9 @@
 
 use super::readings_draw;
 use super::readings_form::{CheckedSet, Focus, Form};
-use super::{Draft, Effect, SavedSet, View, ViewId};
-use crate::instrument::{DialReading, Geometry};
+use super::{Draft, Effect, View, ViewId};
+use crate::instrument::Geometry;
 use crate::journal::Payload;
-use crate::session::FlowCurveOptions;
-use crate::session::json::curve_json;
-use crate::session::state::fit_rows;
-use crate::site::Site;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::Action;
@@ -18,7 +14,6 @@ use crate::tui::strings::readings as s;
 use crate::tui::widgets::editing::{self, EditStep, Leave};
 use ratatui::Frame;
 use ratatui::layout::Rect;
-use std::sync::Arc;
 
 pub struct ReadingsView {
     form: Form,
@@ -125,30 +120,11 @@ impl ReadingsView {
                 return vec![Effect::Status(refusal.message)];
             }
         };
-        let set = Arc::new(SavedSet {
-            viscometer: visc.id.clone(),
-            geometry: visc.geometry.clone(),
-            product: product.clone(),
-            temperature_text: checked.temperature.as_ref().map(|t| t.0.clone()),
-            readings: checked
-                .rows
-                .iter()
-                .map(|r| DialReading::new(r.rpm, r.dial))
-                .collect(),
-        });
-        let drafts = drafts(
-            &checked,
-            &visc.id,
-            &product,
-            ctx.picks.equipment.clone(),
-            &ctx.site,
-        );
+        let drafts = drafts(&checked, &visc.id, &product, ctx.picks.equipment.clone());
         self.form.reset(Some(&visc.geometry));
-        vec![
-            Effect::SaveSet { drafts, set },
-            Effect::Show(ViewId::Curve),
-            Effect::Status(s::SAVED.to_string()),
-        ]
+        let mut effects: Vec<Effect> = drafts.into_iter().map(Effect::Journal).collect();
+        effects.push(Effect::Status(s::SAVED.to_string()));
+        effects
     }
 }
 
@@ -159,15 +135,14 @@ fn status(result: Result<(), &'static str>) -> Vec<Effect> {
     }
 }
 
-/// The set record, then the answer the tool gives for it (the flow curve by the choice
-/// rule, so the journal holds what was seen as well as what was read), then the notes
-/// typed with it as a note record on the same equipment.
+/// The set record, then the notes typed with it as a note record on the same equipment.
+/// The flow curve is fitted once, when the journal's numbered record is applied to the
+/// session state; the app then journals it as a result linked to the set.
 fn drafts(
     checked: &CheckedSet,
     viscometer: &str,
     product: &str,
     equipment: Option<String>,
-    site: &Site,
 ) -> Vec<Draft> {
     let set = Payload::ViscometerSet {
         viscometer: viscometer.to_string(),
@@ -177,14 +152,6 @@ fn drafts(
         rows: checked.rows.clone(),
     };
     let mut out = vec![draft(set, equipment.clone())];
-    if let Ok(curve) = fit_rows(site, viscometer, &checked.rows) {
-        let temperature_k = checked.temperature.as_ref().map(|t| t.1);
-        let result = Payload::Result {
-            what: format!("flow-curve {}", curve.fit.model.kind().title()),
-            data: curve_json(&curve, &FlowCurveOptions::default(), temperature_k),
-        };
-        out.push(draft(result, equipment.clone()));
-    }
     if let Some(text) = &checked.notes {
         out.push(draft(
             Payload::Note {

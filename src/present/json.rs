@@ -2,8 +2,9 @@
 //! the project (`rheoside fit --json`, journalled results, the JSON report): add keys, never
 //! rename them.
 
-use super::{FlowCurve, FlowCurveOptions};
+use super::Style;
 use crate::rheology::Weighting;
+use crate::session::{FlowCurve, FlowCurveOptions};
 use serde_json::{Map, Value, json};
 
 /// The `--json` object. Key names are a contract with outside scripts: add keys, never rename.
@@ -26,7 +27,7 @@ pub fn curve_json(curve: &FlowCurve, opts: &FlowCurveOptions, temperature_k: Opt
         "r_squared": finite(fit.r_squared),
         "rmse_pa": finite(fit.rmse_pa),
         "aicc": fit.aicc.map_or(Value::Null, finite),
-        "reason": curve.reason,
+        "reason": super::reason::for_curve(curve, Style::SI),
         "dof": fit.dof,
         "weighting": match opts.weighting { Weighting::Unweighted => "none", Weighting::Relative => "relative" },
         "rate_correction": opts.rate_correction,
