@@ -5,9 +5,11 @@
 mod support;
 
 mod cli_fit;
+mod hub;
 mod instrument;
 mod journal;
 mod journal_crash;
+mod layering;
 mod report;
 mod rheology;
 mod rheology_choice;
