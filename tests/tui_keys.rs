@@ -15,7 +15,7 @@ use rheoside::tui::keymap::{BINDINGS, Context};
 use rheoside::tui::overlay::Overlay;
 use rheoside::tui::render;
 use rheoside::tui::theme::{ColourMode, Glyphs, Theme};
-use rheoside::tui::views::ViewId;
+use rheoside::tui::views;
 use rheoside::tui::writer::Reply;
 
 fn app() -> App {
@@ -58,7 +58,7 @@ fn picked(app: &mut App) {
     press(app, KeyCode::Enter);
     press(app, KeyCode::Enter);
     press(app, KeyCode::Tab);
-    assert_eq!(app.active_id(), ViewId::Readings);
+    assert_eq!(app.active_id(), views::readings::ID);
 }
 
 /// Invented readings of an HB-like sauce on the standard six-speed viscometer (the form
@@ -80,7 +80,7 @@ fn release_and_repeat_events_are_ignored() {
         a.on_key(&event(KeyCode::Tab, KeyModifiers::NONE, kind));
     }
     assert_eq!(a.state(), RunState::Running);
-    assert_eq!(a.active_id(), ViewId::Site);
+    assert_eq!(a.active_id(), views::site::ID);
     press(&mut a, KeyCode::Char('q'));
     assert_eq!(a.state(), RunState::Quit);
 }
@@ -173,7 +173,7 @@ fn every_overlay_closes_without_esc() {
     picked(&mut a);
     type_text(&mut a, "4");
     press(&mut a, KeyCode::Enter);
-    assert!(matches!(a.context(), Context::Top(ViewId::Readings)));
+    assert!(matches!(a.context(), Context::Top(views::readings::ID)));
 }
 
 #[test]
@@ -187,15 +187,15 @@ fn tab_and_shift_tab_walk_the_views() {
     assert_eq!(
         seen,
         [
-            ViewId::Site,
-            ViewId::Readings,
-            ViewId::Curve,
-            ViewId::Journal,
-            ViewId::Site
+            views::site::ID,
+            views::readings::ID,
+            views::curve::ID,
+            views::journal::ID,
+            views::site::ID
         ]
     );
     press(&mut a, KeyCode::BackTab);
-    assert_eq!(a.active_id(), ViewId::Journal);
+    assert_eq!(a.active_id(), views::journal::ID);
 }
 
 #[test]
@@ -210,7 +210,7 @@ fn a_set_goes_to_the_journal_and_its_curve_is_shown() {
     press(&mut a, KeyCode::Char('s'));
     // Numbered by the journal but not yet on disk: the curve is shown, not called saved.
     let out = support::journal_answers(&mut a, false);
-    assert_eq!(a.active_id(), ViewId::Curve);
+    assert_eq!(a.active_id(), views::curve::ID);
     let Payload::ViscometerSet {
         viscometer,
         product,
@@ -273,7 +273,7 @@ fn a_wrong_unit_is_refused_in_words_and_the_set_is_not_saved() {
     press(&mut a, KeyCode::Enter);
     press(&mut a, KeyCode::Char('s'));
     assert!(a.take_outbox().is_empty());
-    assert_eq!(a.active_id(), ViewId::Readings);
+    assert_eq!(a.active_id(), views::readings::ID);
     assert!(a.status().starts_with("row 1 Speed:"), "{}", a.status());
     assert!(a.status().contains("speed is expected"), "{}", a.status());
 }
@@ -307,15 +307,19 @@ fn a_note_is_journalled_under_the_picked_equipment() {
 
 #[test]
 fn the_help_lists_every_binding_of_the_key_map() {
-    let views: Vec<ViewId> = app().views().iter().map(|v| v.id()).collect();
+    let a = app();
     let theme = Theme::new(ColourMode::Plain, Glyphs::Unicode);
-    let text: String = rheoside::tui::overlay::help_lines(&views, &theme)
+    let text: String = rheoside::tui::overlay::help_lines(a.views(), &theme)
         .iter()
         .map(|l| l.to_string() + "\n")
         .collect();
-    for b in BINDINGS {
+    let own = a.views().iter().flat_map(|v| v.keys().iter());
+    let mut n = 0;
+    for b in BINDINGS.iter().chain(own) {
         assert!(text.contains(b.label), "help lacks {:?}", b.label);
+        n += 1;
     }
+    assert!(n > BINDINGS.len(), "the views' own keys are listed too");
 }
 
 #[test]

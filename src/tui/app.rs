@@ -82,7 +82,7 @@ impl App {
         };
         self.ctx.picks.product = Some(last.item.product.clone());
         self.ctx.picks.equipment = last.equipment.clone();
-        self.apply(vec![Effect::Show(ViewId::Curve)]);
+        self.apply(vec![Effect::Show(views::curve::ID)]);
     }
 
     pub fn state(&self) -> RunState {
@@ -166,7 +166,7 @@ impl App {
                 if let Some(d) = draft {
                     self.journal(d);
                 }
-                self.apply(vec![Effect::Show(ViewId::Curve)]);
+                self.apply(vec![Effect::Show(views::curve::ID)]);
             }
             Payload::Choice { set, .. } => {
                 let Some(entry) = self.ctx.session.sets.iter().find(|e| e.seq == *set) else {
@@ -249,7 +249,8 @@ impl App {
             return;
         };
         let context = self.context();
-        let Some(action) = keymap::lookup(context, key) else {
+        let view_keys = self.active_view().keys();
+        let Some(action) = keymap::lookup(context, key, view_keys) else {
             return;
         };
         if action == Action::Interrupt {

@@ -1,5 +1,7 @@
-//! The one key map: every binding, where it applies and what it is called. The footer and the
-//! help overlay are generated from this table, so they cannot disagree with what keys do.
+//! The key map: the shared bindings (everywhere, at the top of every view, moving, editing,
+//! the overlays) live here; each view declares its own in a table beside its code
+//! ([`super::views::View::keys`]). The footer and the help overlay are generated from these
+//! tables, so they cannot disagree with what keys do.
 
 pub use super::key::Key;
 use super::strings::keys as label;
@@ -53,7 +55,8 @@ pub enum Scope {
     Global,
     /// Moving around, at the top level of every view.
     Moving,
-    View(ViewId),
+    /// The active view's own bindings (its `keys()` table).
+    View,
     /// While a field is being typed into (including the note box).
     Editing,
     /// The note box, before the editing keys.
@@ -77,7 +80,7 @@ impl Context {
     /// Scopes to search, most specific first.
     pub fn scopes(self) -> Vec<Scope> {
         match self {
-            Context::Top(v) => vec![Scope::View(v), Scope::Moving, Scope::Global, Scope::Always],
+            Context::Top(_) => vec![Scope::View, Scope::Moving, Scope::Global, Scope::Always],
             Context::Editing => vec![Scope::Editing, Scope::Always],
             Context::Note => vec![Scope::NoteBox, Scope::Editing, Scope::Always],
             Context::Help => vec![Scope::Help, Scope::Always],
@@ -105,7 +108,7 @@ pub struct Binding {
     pub footer: bool,
 }
 
-const fn b(scope: Scope, keys: &'static [Key], action: Action, label: &'static str) -> Binding {
+pub const fn b(scope: Scope, keys: &'static [Key], action: Action, label: &'static str) -> Binding {
     Binding {
         scope,
         keys,
@@ -116,7 +119,7 @@ const fn b(scope: Scope, keys: &'static [Key], action: Action, label: &'static s
 }
 
 /// Same as `b`, but only listed in the help.
-const fn h(scope: Scope, keys: &'static [Key], action: Action, label: &'static str) -> Binding {
+pub const fn h(scope: Scope, keys: &'static [Key], action: Action, label: &'static str) -> Binding {
     Binding {
         footer: false,
         ..b(scope, keys, action, label)
@@ -127,11 +130,7 @@ use Action as A;
 use Key as K;
 use Scope as S;
 
-const SITE: S = S::View(ViewId::Site);
-const READ: S = S::View(ViewId::Readings);
-const CURVE: S = S::View(ViewId::Curve);
-
-/// The whole map, in the order the help lists it.
+/// The shared bindings, in the order the help lists them.
 pub const BINDINGS: &[Binding] = &[
     b(S::Always, &[K::Ctrl('c')], A::Interrupt, label::INTERRUPT),
     b(S::Global, &[K::Char('?')], A::Help, label::HELP),
@@ -147,27 +146,6 @@ pub const BINDINGS: &[Binding] = &[
     h(S::Moving, &[K::PageDown], A::PageDown, label::PAGE_DOWN),
     h(S::Moving, &[K::Home, K::Char('g')], A::Home, label::HOME),
     h(S::Moving, &[K::End, K::Char('G')], A::End, label::END),
-    b(SITE, &[K::Enter, K::Char(' ')], A::Activate, label::PICK),
-    b(
-        READ,
-        &[K::Enter, K::Char('e')],
-        A::Activate,
-        label::EDIT_FIELD,
-    ),
-    h(READ, &[K::Digit], A::Type('0'), label::TYPE_VALUE),
-    b(READ, &[K::Char('s')], A::Save, label::SAVE_SET),
-    h(READ, &[K::Char('a')], A::AddRow, label::ADD_ROW),
-    h(READ, &[K::Char('x')], A::RemoveRow, label::REMOVE_ROW),
-    b(CURVE, &[K::Char('m')], A::NextModel, label::NEXT_MODEL),
-    h(CURVE, &[K::Char('M')], A::PrevModel, label::PREV_MODEL),
-    h(CURVE, &[K::Char('A')], A::AutoModel, label::AUTO_MODEL),
-    b(
-        CURVE,
-        &[K::Char('r'), K::Enter],
-        A::Activate,
-        label::SET_RATE,
-    ),
-    h(CURVE, &[K::Digit], A::Type('0'), label::TYPE_RATE),
     b(S::Editing, &[K::Enter], A::Accept, label::ACCEPT),
     b(S::Editing, &[K::Tab], A::AcceptNext, label::ACCEPT_NEXT),
     h(S::Editing, &[K::BackTab], A::AcceptPrev, label::ACCEPT_PREV),
@@ -239,10 +217,9 @@ pub const BINDINGS: &[Binding] = &[
 
 /// The action a pressed key stands for in this context. While typing, a printable
 /// character with no binding is text for the field.
-pub fn lookup(ctx: Context, key: Key) -> Option<Action> {
+pub fn lookup(ctx: Context, key: Key, view_keys: &'static [Binding]) -> Option<Action> {
     for scope in ctx.scopes() {
-        let hit = BINDINGS
-            .iter()
+        let hit = table(scope, view_keys)
             .filter(|b| b.scope == scope)
             .find_map(|b| b.keys.iter().find(|k| k.matches(key)).map(|k| (b, *k)));
         if let Some((binding, matched)) = hit {
@@ -261,14 +238,24 @@ pub fn lookup(ctx: Context, key: Key) -> Option<Action> {
 /// The bindings that apply in a context, most specific first. A binding is left out when
 /// an earlier one has the same action, or already takes all of its keys (Ctrl-C in the quit
 /// question means "yes", so the everywhere-binding of Ctrl-C is not listed there).
-pub fn bindings_for(ctx: Context) -> Vec<&'static Binding> {
-    in_scopes(&ctx.scopes())
+pub fn bindings_for(ctx: Context, view_keys: &'static [Binding]) -> Vec<&'static Binding> {
+    in_scopes(&ctx.scopes(), view_keys)
 }
 
-fn in_scopes(scopes: &[Scope]) -> Vec<&'static Binding> {
+/// Where a scope's bindings are listed: the view's own table, or the shared one.
+fn table(scope: Scope, view_keys: &'static [Binding]) -> impl Iterator<Item = &'static Binding> {
+    let rows = if scope == Scope::View {
+        view_keys
+    } else {
+        BINDINGS
+    };
+    rows.iter()
+}
+
+fn in_scopes(scopes: &[Scope], view_keys: &'static [Binding]) -> Vec<&'static Binding> {
     let mut out: Vec<&'static Binding> = Vec::new();
     for &scope in scopes {
-        for binding in BINDINGS.iter().filter(|b| b.scope == scope) {
+        for binding in table(scope, view_keys).filter(|b| b.scope == scope) {
             let same_action = out.iter().any(|o| o.action == binding.action);
             let shadowed = binding
                 .keys
@@ -283,8 +270,8 @@ fn in_scopes(scopes: &[Scope]) -> Vec<&'static Binding> {
 }
 
 /// Footer items for a context: ("key", "what it does"), in the map's order.
-pub fn footer(ctx: Context) -> Vec<(String, &'static str)> {
-    in_scopes(&ctx.footer_scopes())
+pub fn footer(ctx: Context, view_keys: &'static [Binding]) -> Vec<(String, &'static str)> {
+    in_scopes(&ctx.footer_scopes(), view_keys)
         .into_iter()
         .filter(|b| b.footer)
         .map(|b| (key_names(b.keys), b.label))

@@ -1,11 +1,12 @@
 //! Boxes drawn over the views: the help (generated from the key map), the question before
 //! quitting, and the note box. Each is intersected with the frame, so none can overflow it.
 
+use super::keymap::Binding;
 use super::keymap::{self, Scope};
 use super::layout::popup;
 use super::strings::{confirm as cs, help as hs, note as ns};
 use super::theme::Theme;
-use super::views::ViewId;
+use super::views::View;
 use super::widgets::field::{Field, FieldKind};
 use ratatui::Frame;
 use ratatui::layout::Rect;
@@ -38,26 +39,33 @@ impl Overlay {
 }
 
 /// Every binding, by where it applies; the views' own sections in tab order.
-pub fn help_lines(views: &[ViewId], t: &Theme) -> Vec<Line<'static>> {
-    let mut sections: Vec<(String, Scope)> = vec![
-        (hs::EVERYWHERE.to_string(), Scope::Always),
-        (hs::TOP_LEVEL.to_string(), Scope::Global),
-        (hs::MOVING.to_string(), Scope::Moving),
+pub fn help_lines(views: &[Box<dyn View>], t: &Theme) -> Vec<Line<'static>> {
+    let shared = |title: &str, scope| {
+        let rows: Vec<&'static Binding> = keymap::in_scope(scope).collect();
+        (title.to_string(), scope, rows)
+    };
+    let mut sections = vec![
+        shared(hs::EVERYWHERE, Scope::Always),
+        shared(hs::TOP_LEVEL, Scope::Global),
+        shared(hs::MOVING, Scope::Moving),
     ];
-    sections.extend(
-        views
-            .iter()
-            .map(|v| (v.title().to_string(), Scope::View(*v))),
-    );
+    for v in views {
+        sections.push((
+            v.title().to_string(),
+            Scope::View,
+            v.keys().iter().collect(),
+        ));
+    }
     sections.extend([
-        (hs::EDITING.to_string(), Scope::Editing),
-        (hs::NOTE_BOX.to_string(), Scope::NoteBox),
-        (hs::IN_HELP.to_string(), Scope::Help),
-        (hs::CONFIRM.to_string(), Scope::ConfirmQuit),
+        shared(hs::EDITING, Scope::Editing),
+        shared(hs::NOTE_BOX, Scope::NoteBox),
+        shared(hs::IN_HELP, Scope::Help),
+        shared(hs::CONFIRM, Scope::ConfirmQuit),
     ]);
     let mut lines = Vec::new();
-    for (title, scope) in sections {
-        let rows: Vec<Line> = keymap::in_scope(scope)
+    for (title, scope, bindings) in sections {
+        let rows: Vec<Line> = bindings
+            .into_iter()
             .map(|b| {
                 Line::from(vec![
                     Span::styled(format!("  {:<KEY_COL$}", keymap::key_names(b.keys)), t.key),
@@ -80,7 +88,7 @@ pub fn help_lines(views: &[ViewId], t: &Theme) -> Vec<Line<'static>> {
     lines
 }
 
-pub fn draw_help(frame: &mut Frame, scroll: u16, views: &[ViewId], t: &Theme) {
+pub fn draw_help(frame: &mut Frame, scroll: u16, views: &[Box<dyn View>], t: &Theme) {
     let area = popup(frame.area(), 74, frame.area().height.saturating_sub(2));
     let lines = help_lines(views, t);
     let block = t

@@ -10,7 +10,6 @@ use super::overlay::{self, Overlay};
 use super::session_log::JournalState;
 use super::strings::{self, small, top};
 use super::theme::Theme;
-use super::views::ViewId;
 use crate::text::sanitize;
 use ratatui::Frame;
 use ratatui::layout::{HorizontalAlignment, Rect};
@@ -29,7 +28,7 @@ pub fn draw(app: &App, frame: &mut Frame) {
         draw_top(frame, r.top, &app.ctx);
         draw_tabs(frame, r.tabs, app);
         app.active_view().render(frame, r.body, &app.ctx);
-        let caution = Paragraph::new(app.active_id().caution()).style(t.caution);
+        let caution = Paragraph::new(app.active_view().caution()).style(t.caution);
         frame.render_widget(caution, r.caution);
         draw_status(frame, r.status, app);
         draw_footer(frame, r.footer, app);
@@ -38,10 +37,7 @@ pub fn draw(app: &App, frame: &mut Frame) {
     }
     match app.overlay() {
         Overlay::None => {}
-        Overlay::Help { scroll } => {
-            let ids: Vec<ViewId> = app.views().iter().map(|v| v.id()).collect();
-            overlay::draw_help(frame, *scroll, &ids, t);
-        }
+        Overlay::Help { scroll } => overlay::draw_help(frame, *scroll, app.views(), t),
         Overlay::ConfirmQuit { .. } => overlay::draw_confirm(frame, &app.unsaved_reasons(), t),
         Overlay::Note(field) => overlay::draw_note(frame, field, t),
     }
@@ -113,7 +109,7 @@ fn draw_tabs(frame: &mut Frame, area: Rect, app: &App) {
         } else {
             t.tab
         };
-        spans.push(Span::styled(format!(" {} ", v.id().title()), style));
+        spans.push(Span::styled(format!(" {} ", v.title()), style));
         spans.push(Span::raw(" "));
     }
     frame.render_widget(Paragraph::new(Line::from(spans)), area);
@@ -133,7 +129,7 @@ fn draw_footer(frame: &mut Frame, area: Rect, app: &App) {
     let t = &app.ctx.theme;
     let mut spans = Vec::new();
     let mut used = 0usize;
-    for (key, label) in keymap::footer(app.context()) {
+    for (key, label) in keymap::footer(app.context(), app.active_view().keys()) {
         let need = key.chars().count() + label.chars().count() + 3;
         if used + need > usize::from(area.width) {
             break;

@@ -15,7 +15,8 @@ use crate::rheology::ModelKind;
 use crate::session::state::{Entry, ViscometerSet};
 use crate::session::{FlowCurve, ModelPick};
 use crate::tui::ctx::Ctx;
-use crate::tui::keymap::Action;
+use crate::tui::keymap::{Action, Binding, Key, Scope, b, h};
+use crate::tui::strings::{caution, keys, views as names};
 use crate::tui::session_log::summarize;
 use crate::tui::widgets::editing::{self, EditStep};
 use crate::tui::widgets::field::{Field, FieldKind};
@@ -24,6 +25,18 @@ use crate::tui::widgets::log_chart::Mark;
 use crate::units::Dimension;
 use ratatui::Frame;
 use ratatui::layout::Rect;
+
+/// This view's id.
+pub const ID: ViewId = ViewId("curve");
+
+/// The Flow curve view's own keys.
+const KEYS: &[Binding] = &[
+    b(Scope::View, &[Key::Char('m')], Action::NextModel, keys::NEXT_MODEL),
+    h(Scope::View, &[Key::Char('M')], Action::PrevModel, keys::PREV_MODEL),
+    h(Scope::View, &[Key::Char('A')], Action::AutoModel, keys::AUTO_MODEL),
+    b(Scope::View, &[Key::Char('r'), Key::Enter], Action::Activate, keys::SET_RATE),
+    h(Scope::View, &[Key::Digit], Action::Type('0'), keys::TYPE_RATE),
+];
 
 /// The model choices in the order `m` steps through them.
 const PICKS: [ModelPick; 6] = [
@@ -60,14 +73,8 @@ pub struct CurveView {
     editing: bool,
 }
 
-impl Default for CurveView {
-    fn default() -> Self {
-        CurveView::new()
-    }
-}
-
 impl CurveView {
-    pub fn new() -> CurveView {
+    pub fn new(_ctx: &Ctx) -> CurveView {
         CurveView {
             chart: None,
             rate: Field::with_text(FieldKind::Positive(Dimension::ShearRate), DEFAULT_RATE),
@@ -182,8 +189,21 @@ fn sample_curve(curve: &FlowCurve, x: LogRange) -> Vec<(f64, f64)> {
 
 impl View for CurveView {
     fn id(&self) -> ViewId {
-        ViewId::Curve
+        ID
     }
+
+    fn title(&self) -> &'static str {
+        names::CURVE
+    }
+
+    fn caution(&self) -> &'static str {
+        caution::CURVE
+    }
+
+    fn keys(&self) -> &'static [Binding] {
+        KEYS
+    }
+
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         if self.editing {

@@ -6,6 +6,7 @@ use super::{Effect, View, ViewId};
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::Action;
+use crate::tui::strings::{caution, views as names};
 use crate::tui::layout::clip_start;
 use crate::tui::session_log::{Entry, EntryStatus};
 use crate::tui::strings::journal as s;
@@ -14,6 +15,9 @@ use ratatui::Frame;
 use ratatui::layout::Rect;
 use ratatui::text::{Line, Span};
 use ratatui::widgets::Paragraph;
+
+/// This view's id.
+pub const ID: ViewId = ViewId("journal");
 
 /// Rows a page key moves (the body is at least this tall at 80×24).
 const PAGE: usize = 10;
@@ -25,6 +29,10 @@ pub struct JournalView {
 }
 
 impl JournalView {
+    pub fn new(_ctx: &Ctx) -> JournalView {
+        JournalView::default()
+    }
+
     fn scroll(&mut self, ctx: &Ctx, by: isize) {
         let len = ctx.session.log.len();
         let from = self.top.unwrap_or(len.saturating_sub(PAGE));
@@ -64,8 +72,17 @@ fn entry_line(e: &Entry, t: &Theme, style: crate::present::Style) -> Line<'stati
 
 impl View for JournalView {
     fn id(&self) -> ViewId {
-        ViewId::Journal
+        ID
     }
+
+    fn title(&self) -> &'static str {
+        names::JOURNAL
+    }
+
+    fn caution(&self) -> &'static str {
+        caution::JOURNAL
+    }
+
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         match action {

@@ -1,56 +1,20 @@
-//! The views and the seam for new ones: a view is one file implementing [`View`] plus one
-//! line in [`all`] (and one `ViewId` variant if it has keys of its own in the key map).
-//! Later views (lines and restart, pumps, tanks, findings) plug in here.
+//! The views and the seam for new ones: a view is one file implementing [`View`] (its id,
+//! title, caution and its own key bindings beside its code) plus one line in the `views!`
+//! list below. Helper files a view splits off are declared as plain modules.
 
-mod curve;
 mod curve_panel;
-mod journal;
-mod readings;
 mod readings_draw;
 mod readings_form;
-mod site;
 
 use super::ctx::Ctx;
-use super::keymap::Action;
-use super::strings::{caution, views as names};
+use super::keymap::{Action, Binding};
 use crate::journal::Payload;
 use ratatui::Frame;
 use ratatui::layout::Rect;
 
-pub use curve::CurveView;
-pub use journal::JournalView;
-pub use readings::ReadingsView;
-pub use site::SiteView;
-
-/// Which view; the key map uses it to scope a view's own keys.
+/// Which view: a short name, used to scope keys, switch views and in tests.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum ViewId {
-    Site,
-    Readings,
-    Curve,
-    Journal,
-}
-
-impl ViewId {
-    pub fn title(self) -> &'static str {
-        match self {
-            ViewId::Site => names::SITE,
-            ViewId::Readings => names::READINGS,
-            ViewId::Curve => names::CURVE,
-            ViewId::Journal => names::JOURNAL,
-        }
-    }
-
-    /// The one-line caution shown under the view.
-    pub fn caution(self) -> &'static str {
-        match self {
-            ViewId::Site => caution::SITE,
-            ViewId::Readings => caution::READINGS,
-            ViewId::Curve => caution::CURVE,
-            ViewId::Journal => caution::JOURNAL,
-        }
-    }
-}
+pub struct ViewId(pub &'static str);
 
 /// A record for the journal, with the line the Journal view shows for it.
 #[derive(Debug, Clone, PartialEq)]
@@ -75,6 +39,17 @@ pub enum Effect {
 pub trait View {
     fn id(&self) -> ViewId;
 
+    /// The tab's name.
+    fn title(&self) -> &'static str;
+
+    /// The one-line caution shown under the view.
+    fn caution(&self) -> &'static str;
+
+    /// The view's own key bindings (the footer and the help read them too).
+    fn keys(&self) -> &'static [Binding] {
+        &[]
+    }
+
     /// React to a key; anything outside the view's own state is returned as effects.
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect>;
 
@@ -96,12 +71,22 @@ pub trait View {
     }
 }
 
-/// Every view, in tab order. Adding a view is one line here.
-pub fn all(ctx: &Ctx) -> Vec<Box<dyn View>> {
-    vec![
-        Box::new(SiteView::new(ctx)),
-        Box::new(ReadingsView::new(ctx)),
-        Box::new(CurveView::new()),
-        Box::new(JournalView::default()),
-    ]
+/// Declares each view's module and builds them all in tab order.
+macro_rules! views {
+    ($($module:ident :: $view:ident),* $(,)?) => {
+        $(pub mod $module;)*
+
+        /// Every view, in tab order.
+        pub fn all(ctx: &Ctx) -> Vec<Box<dyn View>> {
+            vec![$(Box::new($module::$view::new(ctx))),*]
+        }
+    };
+}
+
+// Adding a view is one file plus one line here.
+views! {
+    site::SiteView,
+    readings::ReadingsView,
+    curve::CurveView,
+    journal::JournalView,
 }

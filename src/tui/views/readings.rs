@@ -8,12 +8,25 @@ use crate::instrument::Geometry;
 use crate::journal::Payload;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
-use crate::tui::keymap::Action;
+use crate::tui::keymap::{Action, Binding, Key, Scope, b, h};
+use crate::tui::strings::{caution, keys, views as names};
 use crate::tui::session_log::summarize;
 use crate::tui::strings::readings as s;
 use crate::tui::widgets::editing::{self, EditStep, Leave};
 use ratatui::Frame;
 use ratatui::layout::Rect;
+
+/// This view's id.
+pub const ID: ViewId = ViewId("readings");
+
+/// The Readings view's own keys.
+const KEYS: &[Binding] = &[
+    b(Scope::View, &[Key::Enter, Key::Char('e')], Action::Activate, keys::EDIT_FIELD),
+    h(Scope::View, &[Key::Digit], Action::Type('0'), keys::TYPE_VALUE),
+    b(Scope::View, &[Key::Char('s')], Action::Save, keys::SAVE_SET),
+    h(Scope::View, &[Key::Char('a')], Action::AddRow, keys::ADD_ROW),
+    h(Scope::View, &[Key::Char('x')], Action::RemoveRow, keys::REMOVE_ROW),
+];
 
 pub struct ReadingsView {
     form: Form,
@@ -173,8 +186,21 @@ fn draft(payload: Payload, equipment: Option<String>) -> Draft {
 
 impl View for ReadingsView {
     fn id(&self) -> ViewId {
-        ViewId::Readings
+        ID
     }
+
+    fn title(&self) -> &'static str {
+        names::READINGS
+    }
+
+    fn caution(&self) -> &'static str {
+        caution::READINGS
+    }
+
+    fn keys(&self) -> &'static [Binding] {
+        KEYS
+    }
+
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         if self.editing {

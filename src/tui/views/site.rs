@@ -4,7 +4,8 @@
 use super::{Effect, View, ViewId};
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
-use crate::tui::keymap::Action;
+use crate::tui::keymap::{Action, Binding, Key, Scope, b};
+use crate::tui::strings::{caution, keys, views as names};
 use crate::tui::layout;
 use crate::tui::strings::site as s;
 use crate::tui::widgets::list::{ListRow, draw_list};
@@ -12,6 +13,12 @@ use ratatui::Frame;
 use ratatui::layout::{Constraint, Layout, Rect};
 use ratatui::text::{Line, Span};
 use ratatui::widgets::Paragraph;
+
+/// This view's id.
+pub const ID: ViewId = ViewId("site");
+
+/// The Site view's own keys.
+const KEYS: &[Binding] = &[b(Scope::View, &[Key::Enter, Key::Char(' ')], Action::Activate, keys::PICK)];
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 enum Column {
@@ -164,8 +171,21 @@ fn clean(text: &str) -> String {
 
 impl View for SiteView {
     fn id(&self) -> ViewId {
-        ViewId::Site
+        ID
     }
+
+    fn title(&self) -> &'static str {
+        names::SITE
+    }
+
+    fn caution(&self) -> &'static str {
+        caution::SITE
+    }
+
+    fn keys(&self) -> &'static [Binding] {
+        KEYS
+    }
+
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         match action {
