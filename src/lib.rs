@@ -1,9 +1,10 @@
 //! rheoside: plant-side answers for thick, non-Newtonian products.
 //!
-//! Floors, from the ground up (imports only run downward):
-//! `units`; then `rheology`, `site`, `journal`; then `instrument`; `session` (the hub both
-//! faces talk to); the faces `cli` and `tui`. The core (`units`, `rheology`, `instrument`)
-//! is pure: no terminal, no disk, no clock.
+//! Floors, from the ground up (imports only run downward; `tests/layering.rs` checks it):
+//! `units` and `text`; the engine (`rheology`, `instrument`); storage (`site`, `journal`,
+//! `readings`); `session` (the hub); `present` (one way to show a number); the faces `cli`
+//! and `tui`, which never use each other. The base and the engine are pure: no terminal, no
+//! disk, no clock.
 
 pub mod units;
 

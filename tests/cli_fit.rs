@@ -108,7 +108,7 @@ fn json_parameters_match_scipy_curve_fit() {
 }
 
 /// An invented Newtonian standard oil of 0.100 Pa·s read on the standard six-speed geometry.
-/// Derived: τ = 0.511 θ Pa and γ̇ = 1.7023 rpm s⁻¹ (REFERENCE.md §2, API RP 13B-1 geometry),
+/// Derived: τ = 0.511 θ Pa and γ̇ = 1.7023 rpm s⁻¹ (API RP 13B-1 geometry; API RP 13D glossary),
 /// so θ = μ·1.7023·rpm/0.511.
 fn newtonian_six_speed_csv(mu: f64) -> String {
     let mut csv = String::from("rpm,dial\n");
@@ -227,7 +227,7 @@ fn human_output_names_the_model_and_why() {
 #[test]
 fn several_temperatures_give_an_activation_energy() {
     // Invented product: power law, n = 0.5, K = 10 Pa·sⁿ at 20 °C, Ea = 30 kJ/mol.
-    // K(T) = 10·exp[(30000/8.314462618)(1/T − 1/293.15)] (Arrhenius, REFERENCE.md §4):
+    // K(T) = 10·exp[(30000/8.314462618)(1/T − 1/293.15)] (Arrhenius; Steffe 1996, ch. 1):
     // at 40 °C, 1/313.15 − 1/293.15 = −2.17863e-4, so K = 10·exp(−0.786099) = 4.55629.
     let mut csv = String::from("shear_rate,shear_stress,temperature\n");
     for (t_c, k) in [(20.0, 10.0), (40.0, 4.556_29)] {

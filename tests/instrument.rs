@@ -56,14 +56,14 @@ fn standard_rate_per_rpm_is_margules_on_the_standard_radii() {
     // Radii 1.8415 cm and 1.7245 cm: API RP 13B-1 / ISO 10414-1, from memory.
     let (rc, rb) = (0.018415, 0.017245);
     assert_eq!((STANDARD_ROTOR_RADIUS_M, STANDARD_BOB_RADIUS_M), (rc, rb));
-    // Margules γ̇b = 2Ω/(1−κ²), derived per rpm (REFERENCE.md §2, derived from Margules).
+    // Margules γ̇b = 2Ω/(1−κ²), derived per rpm (derived from Margules; Steffe 1996, §3.3).
     let kappa: f64 = rb / rc;
     let per_rpm = 2.0 * OMEGA_PER_RPM / (1.0 - kappa * kappa);
     assert!((per_rpm - 1.7023).abs() < 5e-5, "{per_rpm}");
     let g = Geometry::from_name("standard-six-speed").unwrap();
     assert!(rel(g.newtonian_rate_per_rpm(), per_rpm) < 1e-12);
     assert!(rel(g.radius_ratio().unwrap(), rc / rb) < 1e-12);
-    // Rates at the six speeds as REFERENCE.md prints them, to their last printed digit.
+    // Rates at the six speeds as the API tables print them (from memory), to their last printed digit.
     let printed = [
         (600.0, 1021.4, 0.05),
         (300.0, 510.7, 0.05),
@@ -85,7 +85,7 @@ fn standard_rate_per_rpm_is_margules_on_the_standard_radii() {
 #[test]
 fn standard_newtonian_fluid_reads_viscosity_as_theta300() {
     // 0.511 Pa/deg (API glossary AV = θ600/2) with 1.7023 s⁻¹/rpm means μ(mPa·s) = θ300
-    // (REFERENCE.md §2, derived): 0.511/(300 × 1.7023) = 1.0006 mPa·s per degree.
+    // (derived from the two calibration constants): 0.511/(300 × 1.7023) = 1.0006 mPa·s per degree.
     let g = Geometry::StandardSixSpeed;
     let mu_pa_s = 0.035;
     let rows: Vec<_> = STANDARD_SPEEDS_RPM
@@ -193,7 +193,7 @@ fn herschel_bulkley_in_the_standard_gap_is_corrected_closely() {
 #[test]
 fn spindle_newtonian_and_power_law() {
     // Spindle in a large container: μ = T/(4πRb²LΩ) for a Newtonian fluid, and γ̇b = 2Ω/n
-    // for a power law (REFERENCE.md §2; Steffe 1996, s → ∞ limit of eq 3.37).
+    // for a power law (Steffe 1996, s → ∞ limit of eq 3.37).
     let sp = Spindle {
         radius_m: 0.01,
         length_m: 0.05,
@@ -265,7 +265,7 @@ fn oilfield_relations_worked_example() {
     assert!((oilfield::yield_point_pa(52.0, 34.0) - 7.6608416).abs() < 1e-9);
     assert!((oilfield::pipe_n(52.0, 34.0) - 0.6129901).abs() < 1e-7);
     assert!((oilfield::pipe_k_mpa_sn(52.0, 34.0) - 379.1524).abs() < 1e-3);
-    // API's 5.11·θ600/1022ⁿ dyn·sⁿ/cm² (REFERENCE.md) is the same K: ×100 to mPa·sⁿ, and
+    // API's 5.11·θ600/1022ⁿ dyn·sⁿ/cm² (API RP 13D) is the same K: ×100 to mPa·sⁿ, and
     // θ600 ≈ 2ⁿθ300 leaves 511/510 (derived): 0.2 % apart.
     let k_dyn = oilfield::pipe_k_dyn_sn_cm2(52.0, 34.0);
     assert!((100.0 * k_dyn / oilfield::pipe_k_mpa_sn(52.0, 34.0) - 511.0 / 510.0).abs() < 1e-4);
@@ -323,7 +323,7 @@ fn scale_flags_at_9_and_101_percent() {
 
 #[test]
 fn unsheared_gap_flag_uses_cup_stress() {
-    // τc = κ²·τb (stress falls as 1/r², REFERENCE.md §2). Dial 20 on the standard geometry:
+    // τc = κ²·τb (stress falls as 1/r², torque balance; Steffe 1996, §3.3). Dial 20 on the standard geometry:
     // τb = 10.22 Pa, κ² = (1.7245/1.8415)² = 0.876966, τc = 8.9626 Pa.
     let g = Geometry::StandardSixSpeed;
     let mut out = convert(&g, &readings(&[(100.0, 20.0), (300.0, 40.0)])).unwrap();

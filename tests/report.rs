@@ -159,7 +159,7 @@ fn markdown_has_every_section_and_the_cautions() {
         "{md}"
     );
     // A Newtonian fluid on the standard viscometer reads μ (mPa·s) = θ300 (API glossary via
-    // REFERENCE.md §2): θ300 = 30, so 30 mPa·s.
+    // API RP 13D): θ300 = 30, so 30 mPa·s.
     assert!(md.contains("**Newtonian**"), "{md}");
     assert!(md.contains("| μ viscosity | 30.0"), "{md}");
     assert!(md.contains("value ± 95 % interval"), "{md}");
@@ -301,7 +301,7 @@ fn json_keeps_its_documented_keys() {
     );
     assert_eq!(s["readings"][0]["value_si"], 620000.0);
     assert_eq!(s["sets"][0]["fit"]["model"], "newtonian");
-    // μ = θ300 mPa·s = 0.030 Pa·s (API glossary via REFERENCE.md §2), to 1 %.
+    // μ = θ300 mPa·s = 0.030 Pa·s (API RP 13D glossary), to 1 %.
     let mu = s["sets"][0]["fit"]["params"]["mu_pa_s"].as_f64().unwrap();
     assert!((mu - 0.030).abs() < 0.0003, "mu {mu}");
     assert_eq!(s["sets"][0]["seen"][0]["agreement"], "differs");

@@ -224,7 +224,7 @@ fn power_law_log_fit_standard_errors_follow_the_textbook_formulas() {
     assert!(rel(khi, (k.ln() + t * se_ln_k).exp()) < 1e-6);
 }
 
-// Source: the model equations (REFERENCE.md §1), worked by hand in the comments.
+// Source: the model equations (Steffe 1996, ch. 1), worked by hand in the comments.
 #[test]
 fn model_formulas_worked_by_hand() {
     // HB τ0 = 5, K = 2, n = 0.5 at 100 1/s: 5 + 2·√100 = 25 Pa, μa = 25/100 = 0.25 Pa·s.

@@ -1,5 +1,5 @@
 //! Property tests: parameters come back from exact model data, and every model's inverse
-//! undoes its stress. Source: the model equations (REFERENCE.md §1) — exact data have a
+//! undoes its stress. Source: the model equations (Steffe 1996, ch. 1) — exact data have a
 //! zero-residual least-squares optimum at the generating parameters, whatever the weighting.
 
 use proptest::prelude::*;

@@ -1,4 +1,4 @@
-//! Arrhenius shift and activation-energy fit (REFERENCE.md §4).
+//! Arrhenius shift and activation-energy fit (Arrhenius; Steffe 1996, ch. 1).
 
 use rheoside::rheology::temperature::{
     GAS_CONSTANT, arrhenius_factor, fit_activation_energy, shift_to_reference,
@@ -15,7 +15,7 @@ fn gas_constant_is_codata_2018() {
     assert_eq!(GAS_CONSTANT, 8.314462618);
 }
 
-// Source: worked by hand from K(T) = K_ref·exp[(Ea/R)(1/T − 1/T_ref)] (REFERENCE.md §4).
+// Source: worked by hand from K(T) = K_ref·exp[(Ea/R)(1/T − 1/T_ref)] (Arrhenius; Steffe 1996, ch. 1).
 // Ea = 40 kJ/mol, T = 60 °C = 333.15 K, T_ref = 20 °C = 293.15 K:
 //   Ea/R          = 40000 / 8.314462618      = 4810.8942 K
 //   1/T − 1/T_ref = 0.00300165 − 0.00341122 = −0.000409572 1/K

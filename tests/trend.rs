@@ -4,7 +4,7 @@
 //!
 //! The readings are a power-law fluid, τ = K·γ̇ⁿ, read on the standard viscometer at its
 //! Newtonian (Margules) rate. The expected fitted K is derived in `expected_k` from the
-//! power-law bob rate of Steffe (1996) eqs 3.33/3.37 (REFERENCE.md §2).
+//! power-law bob rate of Steffe (1996) eqs 3.33/3.37.
 
 use assert_cmd::Command;
 use chrono::{DateTime, Duration, FixedOffset, Utc};
@@ -12,7 +12,7 @@ use rheoside::journal::*;
 use std::path::Path;
 
 const N: f64 = 0.35;
-/// Standard viscometer: rotor 18.415 mm, bob 17.245 mm (REFERENCE.md §2, from memory);
+/// Standard viscometer: rotor 18.415 mm, bob 17.245 mm (API RP 13B-1, from memory);
 /// 1.7023 s⁻¹ per rpm and 0.511 Pa per dial degree.
 const RATIO: f64 = 18.415 / 17.245;
 const RATE_PER_RPM: f64 = 1.7023;
@@ -304,7 +304,7 @@ fn k_on(row: &str) -> f64 {
 #[test]
 fn a_set_read_warm_is_shifted_to_the_reference_temperature() {
     // The demo's chilli sauce: reference 25 °C, activation energy 30 kJ/mol (invented).
-    // Arrhenius (REFERENCE.md §4), worked by hand for 45 °C: (30000/8.314462618) = 3608.171 K,
+    // Arrhenius (Steffe 1996, ch. 1), worked by hand for 45 °C: (30000/8.314462618) = 3608.171 K,
     // 1/318.15 − 1/298.15 = −2.108445e-4, product −0.760762, so K(45 °C) = K(25 °C)·0.467308.
     let dir = tempfile::tempdir().unwrap();
     let now = Utc::now();

@@ -200,7 +200,7 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
     let want: Vec<&str> = want.iter().map(String::as_str).collect();
     s.wait_for_all(&want);
     // ...and near the law the dials were made from: τ = 5 + 0.8·γ̇^0.6 Pa at the standard
-    // geometry's Newtonian rates (1.7023 s⁻¹ per rpm, 0.511 Pa per degree; REFERENCE.md §2),
+    // geometry's Newtonian rates (1.7023 s⁻¹ per rpm, 0.511 Pa per degree; API RP 13D),
     // rounded to the dial. The fit uses the n-corrected rates, so allow 10 %.
     let by = |sym: &str| {
         curve

@@ -22,7 +22,8 @@ pub struct Calibration {
 
 /// Compare the torque read on a Newtonian standard (viscosity in Pa·s) with the torque the
 /// geometric bob length predicts: T = τ·2πRb²L with τ = μ·γ̇b (Margules; for a spindle
-/// μ = T/(4πRb²LΩ), REFERENCE.md §2, after Wein on end effects).
+/// μ = T/(4πRb²LΩ), Steffe 1996, §3.3; after Wein, "End effects in rotational
+/// viscometry").
 ///
 /// The factor is the least-squares slope through the origin of measured against expected
 /// torque, so the better-resolved fast readings count most. Any factor already set in the

@@ -76,7 +76,8 @@ pub(crate) fn scale_flags(dial: f64, full_scale: f64) -> Vec<ReadingFlag> {
 /// Flag readings where the cup-side stress τc = κ²·τb is below the yield stress τ0.
 ///
 /// Apply after a fit has given τ0 (Pa). The stress falls as 1/r² across the gap
-/// (REFERENCE.md §2), so below τ0 the outer fluid stays still and the gap formula overstates
+/// (τc = τb·(Rb/Rc)², a torque balance on the fluid shell;
+/// Steffe 1996, §3.3), so below τ0 the outer fluid stays still and the gap formula overstates
 /// the rate. A spindle in a large container is never flagged: its rate 2Ω/n′ already holds
 /// when the far fluid does not move, since Ω = ½∫γ̇(τ)/τ dτ from 0 to τb counts the still
 /// fluid as γ̇ = 0 (Krieger's infinite-medium relation). A non-finite or non-positive τ0

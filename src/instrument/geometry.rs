@@ -16,7 +16,8 @@ pub const STANDARD_BOB_LENGTH_M: f64 = 0.038;
 ///
 /// Follows from API's apparent viscosity AV = θ600/2 mPa·s at 1022 s⁻¹ (API glossary); the
 /// nominal spring constant and bob length would give about 0.544, so 0.511 is used as the
-/// calibrated value (REFERENCE.md §2).
+/// calibrated value (the API definition of apparent viscosity, AV = θ600/2 mPa·s at
+/// 1022 s⁻¹, API RP 13D glossary).
 pub const STANDARD_STRESS_PER_DIAL_PA: f64 = 0.511;
 /// Full-scale dial of the standard instrument, degrees [from memory].
 pub const STANDARD_FULL_SCALE_DIAL: f64 = 300.0;

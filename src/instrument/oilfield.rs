@@ -39,7 +39,7 @@ pub fn pipe_k_mpa_sn(t600: f64, t300: f64) -> f64 {
 }
 
 /// Pipe consistency index in the API RP 13D form Kp = 5.11·θ600/1022ⁿ, dyn·sⁿ/cm²
-/// (REFERENCE.md verification note); 100 × this is within about 0.2 % of [`pipe_k_mpa_sn`]
+/// (API RP 13D, 2002 and later editions); 100 × this is within about 0.2 % of [`pipe_k_mpa_sn`]
 /// (1 dyn·s/cm² = 100 mPa·s; 511 against 510 in the numerator).
 pub fn pipe_k_dyn_sn_cm2(t600: f64, t300: f64) -> f64 {
     5.11 * t600 / 1022f64.powf(pipe_n(t600, t300))

@@ -1,6 +1,7 @@
 //! The power law from a straight line in log–log coordinates, with its textbook intervals.
 //!
-//! REFERENCE.md §1: fit ln τ = ln K + n·ln γ̇ by ordinary least squares; SE(n) = √(s²/Sxx),
+//! Ordinary least squares on the logarithms (Draper & Smith 1998, *Applied Regression
+//! Analysis*, 3rd ed., ch. 1, from memory): fit ln τ = ln K + n·ln γ̇ by ordinary least squares; SE(n) = √(s²/Sxx),
 //! s² = SSR/(m − 2); 95 % CI n ± t(0.975, m − 2)·SE(n); for K, exp(ln K ± t·SE(ln K)).
 //! A log fit weights relative errors, so it differs from [`super::fit`] on stress; it is the
 //! quick look and the nonlinear fit's start.

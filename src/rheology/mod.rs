@@ -1,7 +1,8 @@
 //! Flow models, least-squares fits with 95 % confidence intervals, model choice, and the
 //! Arrhenius temperature shift. Pure: no terminal, disk or clock.
 //!
-//! Methods and sources: REFERENCE.md §1 (models, fitting) and §4 (temperature). Conventions for
+//! Methods and sources are named where each is defined (models in `model`, the fit in `fit`,
+//! the choice rule in `choose`, the temperature shift in `temperature`). Conventions for
 //! R², RMSE, AICc and the intervals are in [`stats`].
 
 mod choose;

@@ -1,7 +1,7 @@
 //! Flow models with numbers: shear stress at a rate, apparent viscosity, and rate at a stress.
 //!
-//! Citations are from memory (REFERENCE.md §1 tags the forms [M]); the forms themselves are the
-//! standard textbook ones.
+//! Citations are from memory; the forms themselves are the standard textbook ones (e.g.
+//! Steffe 1996, *Rheological Methods in Food Process Engineering*, 2nd ed., ch. 1).
 
 use super::kind::{ModelKind, ParamName};
 

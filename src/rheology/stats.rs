@@ -4,7 +4,7 @@
 //! Conventions (the same for every model and weighting):
 //! - Covariance C = s²(JᵀJ)⁻¹ with s² = SSR/(m − p_free), SSR the fit's own (weighted) objective;
 //!   CI = estimate ± t(0.975, m − p_free)·√Cjj. This is what scipy's `curve_fit` returns with
-//!   `absolute_sigma=False` (REFERENCE.md §1, scipy docs).
+//!   `absolute_sigma=False` (SciPy documentation of `scipy.optimize.curve_fit`).
 //! - R² = 1 − Σ(τ − τ̂)²/Σ(τ − τ̄)² and RMSE = √(Σ(τ − τ̂)²/m) are always on the raw stresses
 //!   in Pa, unweighted, so they read the same whichever weighting was fitted.
 //! - AICc = m·ln(SSR/m) + 2k + 2k(k+1)/(m − k − 1) (Hurvich & Tsai 1989, from memory), with SSR

@@ -1,7 +1,8 @@
 //! Arrhenius temperature shift of the consistency index K (or a viscosity μ), and the
 //! activation energy fitted from the same product read at several temperatures.
 //!
-//! REFERENCE.md §4: K(T) = K_ref·exp[(Ea/R)(1/T − 1/T_ref)], T in kelvin; n is taken as
+//! Arrhenius (Steffe 1996, *Rheological Methods in Food Process Engineering*, 2nd ed.,
+//! ch. 1): K(T) = K_ref·exp[(Ea/R)(1/T − 1/T_ref)], T in kelvin; n is taken as
 //! independent of temperature. The yield stress has no general law and is not shifted here.
 
 use super::error::FitError;

@@ -1,5 +1,6 @@
 //! One product read at several temperatures: a flow curve per temperature and the
-//! activation energy of its viscosity parameter (Arrhenius, REFERENCE.md §4).
+//! activation energy of its viscosity parameter (the Arrhenius form; Steffe 1996, *Rheological Methods in Food
+//! Process Engineering*, 2nd ed., ch. 1).
 
 use super::flow_curve::{
     FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, analyse,
@@ -182,8 +183,8 @@ mod tests {
 
 /// The model with its viscosity parameter (K, μ, μp or μc) brought from the temperature it
 /// was read at to `t_ref_k` by Arrhenius, so sets read warm and cold compare against the
-/// same spec limits. τ0 and n are left as measured: REFERENCE.md §4 takes n as independent
-/// of temperature, and the yield stress has no general temperature law.
+/// same spec limits. τ0 and n are left as measured: n is taken as independent of temperature
+/// (Steffe 1996, the orange-juice concentrate example: n 0.76–0.80 from −19 to 29 °C), and the yield stress has no general temperature law.
 pub fn shift_model_to_reference(model: &Model, ea_j_per_mol: f64, t_k: f64, t_ref_k: f64) -> Model {
     let to_ref = |v: f64| shift_to_reference(v, ea_j_per_mol, t_k, t_ref_k);
     match *model {
@@ -211,7 +212,7 @@ mod shift_tests {
 
     #[test]
     fn shifts_only_the_viscosity_parameter() {
-        // Arrhenius, REFERENCE.md §4, worked by hand: Ea = 40 kJ/mol, read at 40 °C, reference
+        // Arrhenius (Steffe 1996, ch. 1), worked by hand: Ea = 40 kJ/mol, read at 40 °C, reference
         // 20 °C: (40000/8.314462618)(1/313.15 − 1/293.15) = 4810.894·(−2.178651e-4) = −1.048126,
         // so K(40 °C)/K(20 °C) = exp(−1.048126) = 0.3505942 and K_ref = 2/0.3505942 = 5.704602.
         let read = Model::HerschelBulkley {

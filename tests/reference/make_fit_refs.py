@@ -34,7 +34,7 @@ from scipy.optimize import curve_fit, least_squares
 TOL = dict(ftol=1e-15, xtol=1e-15, gtol=1e-15, maxfev=200000)
 
 # Six-speed oilfield-type viscometer: Newtonian bob rate 1.7023 1/s per rpm and 0.511 Pa per
-# dial degree (REFERENCE.md section 2; API RP 13B-1 geometry).
+# dial degree (API RP 13B-1 geometry; API RP 13D glossary).
 RPM = [600, 300, 200, 100, 6, 3]
 TS4_DIAL = [208.5, 173.5, 155.5, 130.0, 73.0, 64.5]
 

@@ -46,7 +46,7 @@ impl Curve for Power {
 }
 
 /// τ = τ0 + Kγ̇ⁿ; parameters [τ0, K, n]; n > 0 kept, τ0 free (its bound is handled by a refit).
-/// Jacobian row [1, γ̇ⁿ, Kγ̇ⁿ ln γ̇] (REFERENCE.md §1).
+/// Jacobian row [1, γ̇ⁿ, Kγ̇ⁿ ln γ̇] (the partial derivatives of the model, derived).
 pub(crate) struct HerschelBulkley;
 
 impl Curve for HerschelBulkley {

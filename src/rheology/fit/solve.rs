@@ -8,8 +8,8 @@ use crate::rheology::linalg::{Mat3, Vec3, inverse_spd};
 use crate::rheology::linear::{fit_line, weighted_line, weighted_origin_slope};
 use crate::rheology::model::Model;
 
-/// Fractions of the smallest stress tried as Herschel–Bulkley starts for τ0 (REFERENCE.md §1
-/// suggests 0.5–1×; 0 covers the power-law end).
+/// Fractions of the smallest stress tried as Herschel–Bulkley starts for τ0 (0.5–1× is
+/// common practice, no source; 0 covers the power-law end).
 const HB_TAU0_STARTS: [f64; 4] = [0.0, 0.5, 0.75, 0.9];
 
 /// A least-squares optimum in the reported parameters.
@@ -78,7 +78,8 @@ fn origin_line(kind: ModelKind, d: &Data) -> Result<(Minimum, Option<Mat3>), Fit
     Ok((min, inv))
 }
 
-/// Start from the log–log line (REFERENCE.md §1), then least squares on stress.
+/// Start from the log–log line (ordinary least squares on ln τ, ln γ̇), then least squares
+/// on stress.
 fn power_law(d: &Data, kind: ModelKind) -> Result<Solved, FitError> {
     let ly: Vec<f64> = d.y.iter().map(|y| y.ln()).collect();
     let start = fit_line(d.lx, &ly).map_or([1.0, 1.0, 0.0], |l| {
