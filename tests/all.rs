@@ -15,6 +15,7 @@ mod rheology_errors;
 mod rheology_props;
 mod rheology_temperature;
 mod site;
+mod site_tank;
 mod trend;
 mod tui_e2e;
 mod tui_keys;
