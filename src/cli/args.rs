@@ -43,6 +43,8 @@ pub enum Command {
     Report(ReportArgs),
     /// A product's fitted constants over past sessions, against its spec limits.
     Trend(TrendArgs),
+    /// Power, torque and caverns for an agitated tank; viscosity from a motor reading.
+    Mix(Box<super::mix::args::MixArgs>),
 }
 
 #[derive(Debug, Args)]

@@ -6,6 +6,7 @@ mod check_site;
 mod fit;
 mod fit_csv;
 mod fit_output;
+mod mix;
 mod record;
 mod report;
 pub mod rheology_args;
@@ -29,6 +30,7 @@ pub fn main() -> ExitCode {
         Some(Command::Record(a)) => record::run(&cli, a),
         Some(Command::Report(a)) => report::run(&cli, a),
         Some(Command::Trend(a)) => trend::run(&cli, a),
+        Some(Command::Mix(a)) => mix::run(&cli, a),
     };
     match outcome {
         Ok(code) => code,

@@ -7,6 +7,11 @@
 pub mod flow_curve;
 pub mod json;
 pub mod state;
+pub mod tank;
+pub mod tank_input;
+pub mod tank_json;
+mod tank_motor;
+pub mod tank_words;
 pub mod temperature;
 pub mod trend;
 

@@ -1,0 +1,212 @@
+//! `rheoside mix` as text: one line per quantity with its range, then the findings and the
+//! cautions.
+
+use crate::mixing::{Cavern, LoadCheck, Spread};
+use crate::session::tank::{MotorAnswer, TankAnswer};
+use crate::session::tank_words::{self, CAUTIONS};
+use crate::units::{self, Dimension, UnitSystem, significant};
+use std::fmt::Write as _;
+
+pub(super) fn table(a: &TankAnswer, sys: UnitSystem) -> String {
+    let mut s = String::new();
+    let p = &a.operating.point;
+    let v = &a.request.vessel;
+    let len = |m: f64| length(m, sys);
+    let tank = v.tank_diameter_m.map_or("tank size not given".into(), |t| {
+        format!("in a {} tank", len(t))
+    });
+    let _ = writeln!(
+        s,
+        "{} impeller, {} across, {tank}",
+        v.impeller.name(),
+        len(v.impeller_diameter_m)
+    );
+    let speed = units::format(
+        p.speed_rps * 2.0 * std::f64::consts::PI,
+        Dimension::Speed,
+        sys,
+    );
+    row(
+        &mut s,
+        "Speed",
+        &format!("{speed} ({} rev/s)", significant(p.speed_rps)),
+    );
+    let ks = &a.curve.ks.spread;
+    row(
+        &mut s,
+        "Effective shear rate",
+        &format!(
+            "{} 1/s (ks {}, {} to {})",
+            significant(p.effective_shear_rate_per_s),
+            significant(ks.value),
+            significant(ks.low),
+            significant(ks.high)
+        ),
+    );
+    row(
+        &mut s,
+        "Apparent viscosity",
+        &viscosity(p.apparent_viscosity_pa_s, sys),
+    );
+    row(
+        &mut s,
+        "Reynolds number",
+        &format!(
+            "{} ({})",
+            significant(p.reynolds),
+            tank_words::regime(p.regime)
+        ),
+    );
+    row(&mut s, "Power number", &significant(p.power_number));
+    row(
+        &mut s,
+        "Power",
+        &ranged(&a.operating.power_w, Dimension::Power, sys),
+    );
+    row(
+        &mut s,
+        "Shaft torque",
+        &ranged(&a.operating.torque_n_m, Dimension::Torque, sys),
+    );
+    if let (Some(sp), Some(b)) = (
+        a.operating.specific_power_w_m3,
+        a.operating.specific_power_band,
+    ) {
+        let kw = |x: f64| significant(x / 1000.0);
+        row(
+            &mut s,
+            "Power per volume",
+            &format!(
+                "{} kW/m3 ({} to {}): {}",
+                kw(sp.value),
+                kw(sp.low),
+                kw(sp.high),
+                tank_words::band(b)
+            ),
+        );
+    }
+    if let Some(m) = &a.operating.motor {
+        row(
+            &mut s,
+            "Motor",
+            &limit(m, Dimension::Power, sys, "needed of a"),
+        );
+    }
+    if let Some(g) = &a.operating.gearbox {
+        row(&mut s, "Gearbox", &limit(g, Dimension::Torque, sys, "of a"));
+    }
+    if let Some(c) = &a.cavern {
+        cavern(&mut s, a, c, sys);
+    }
+    if let Some(m) = &a.motor {
+        motor(&mut s, m, sys);
+    }
+    list(&mut s, "Findings", &tank_words::findings(a));
+    let cautions: Vec<String> = CAUTIONS.iter().map(|c| c.to_string()).collect();
+    list(&mut s, "Cautions", &cautions);
+    s
+}
+
+fn row(s: &mut String, label: &str, value: &str) {
+    let _ = writeln!(s, "  {label:<22} {value}");
+}
+
+fn list(s: &mut String, title: &str, items: &[String]) {
+    if items.is_empty() {
+        return;
+    }
+    let _ = writeln!(s, "{title}:");
+    for i in items {
+        let _ = writeln!(s, "  - {i}");
+    }
+}
+
+fn length(m: f64, sys: UnitSystem) -> String {
+    let unit = if sys == UnitSystem::UsCustomary {
+        "ft"
+    } else {
+        "m"
+    };
+    units::format_in(m, Dimension::Length, unit)
+}
+
+fn viscosity(pa_s: f64, sys: UnitSystem) -> String {
+    let unit = if sys == UnitSystem::UsCustomary {
+        "cP"
+    } else {
+        "Pa.s"
+    };
+    units::format_in(pa_s, Dimension::DynamicViscosity, unit)
+}
+
+fn ranged(x: &Spread, dim: Dimension, sys: UnitSystem) -> String {
+    let f = |v: f64| units::format(v, dim, sys);
+    format!("{} ({} to {})", f(x.value), f(x.low), f(x.high))
+}
+
+fn limit(c: &LoadCheck, dim: Dimension, sys: UnitSystem, joint: &str) -> String {
+    let f = |v: f64| units::format(v, dim, sys);
+    format!(
+        "{} {joint} {} limit ({:.0} %): {}",
+        f(c.demand.value),
+        f(c.limit),
+        100.0 * c.fraction,
+        tank_words::load(c.verdict)
+    )
+}
+
+fn cavern(s: &mut String, a: &TankAnswer, c: &Cavern, sys: UnitSystem) {
+    let against = a.request.vessel.tank_diameter_m.map_or(String::new(), |t| {
+        format!(" against a {} tank", length(t, sys))
+    });
+    row(
+        s,
+        "Cavern (Elson)",
+        &format!(
+            "{} across, {} high{against}",
+            length(c.diameter_m, sys),
+            length(c.height_m, sys)
+        ),
+    );
+    if let Some(n) = a.speed_to_wall_rps() {
+        let w = units::format(n * 2.0 * std::f64::consts::PI, Dimension::Speed, sys);
+        row(s, "Cavern at the wall", &format!("from about {w}"));
+    }
+}
+
+fn motor(s: &mut String, m: &MotorAnswer, sys: UnitSystem) {
+    row(
+        s,
+        "Shaft power (motor)",
+        &units::format(m.shaft_power_w, Dimension::Power, sys),
+    );
+    let Some(d) = m.done() else { return };
+    row(
+        s,
+        "Viscosity (motor)",
+        &format!(
+            "{} ({})",
+            viscosity(d.apparent_viscosity_pa_s, sys),
+            tank_words::regime(d.regime)
+        ),
+    );
+    if let Ok(k) = d.k {
+        row(
+            s,
+            "K (motor, n kept)",
+            &format!("{} Pa.s^n", significant(k)),
+        );
+    }
+    if let Some(c) = &m.comparison {
+        row(
+            s,
+            "Viscosity (viscometer)",
+            &format!(
+                "{} at {} 1/s",
+                viscosity(c.from_viscometer_pa_s, sys),
+                significant(c.shear_rate_per_s)
+            ),
+        );
+        let _ = writeln!(s, "  {}", tank_words::disagreement(c.agreement));
+    }
+}
