@@ -5,6 +5,7 @@
 mod support;
 
 mod cli_fit;
+mod cli_mix;
 mod instrument;
 mod journal;
 mod journal_crash;

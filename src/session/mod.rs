@@ -12,6 +12,7 @@ pub mod tank;
 pub mod tank_input;
 pub mod tank_json;
 mod tank_motor;
+mod tank_readings;
 pub mod tank_words;
 pub mod temperature;
 pub mod trend;

@@ -2,7 +2,7 @@
 //! at the tank (agitator speed, motor current or power, voltage, level), and values typed as
 //! flags, merged in that order (a flag beats a reading, a reading beats the site).
 
-use super::state::{Entry, SpotReading};
+pub use super::tank_readings::{TankReadings, readings_from_journal};
 use crate::mixing::{
     Baffling, Drive, Fluid, ImpellerKind, MixError, MotorReading, Overrides, RibbonGeometry, Vessel,
 };
@@ -28,36 +28,6 @@ pub struct TankFlags {
     pub motor_efficiency: Option<f64>,
     pub gearbox_efficiency: Option<f64>,
     pub no_load_power_w: Option<f64>,
-}
-
-/// The latest spot readings recorded at one tank, SI except speed (rev/s).
-#[derive(Debug, Clone, Copy, PartialEq, Default)]
-pub struct TankReadings {
-    pub speed_rps: Option<f64>,
-    pub motor_current_a: Option<f64>,
-    pub motor_power_w: Option<f64>,
-    pub voltage_v: Option<f64>,
-    pub liquid_height_m: Option<f64>,
-}
-
-impl TankReadings {
-    /// The newest of each reading journalled against `tank_id`.
-    pub fn latest(readings: &[Entry<SpotReading>], tank_id: &str) -> TankReadings {
-        let last = |name: &str| {
-            readings
-                .iter()
-                .rev()
-                .find(|e| e.equipment.as_deref() == Some(tank_id) && e.item.name == name)
-                .map(|e| e.item.value_si)
-        };
-        TankReadings {
-            speed_rps: last("agitator-speed").map(|w| w / (2.0 * PI)),
-            motor_current_a: last("motor-current"),
-            motor_power_w: last("motor-power"),
-            voltage_v: last("voltage"),
-            liquid_height_m: last("liquid-level"),
-        }
-    }
 }
 
 /// Everything the engine needs for one tank at one speed.

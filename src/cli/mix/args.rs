@@ -1,12 +1,13 @@
 //! `rheoside mix` arguments: a tank from the site (`--tank`) or typed in full, the product's
 //! flow curve, and an optional motor reading.
 
-use crate::cli::rheology_args::RheologyArgs;
+use crate::cli::rheology_args::RheologySourceArgs;
 use clap::Args;
 
 /// Power, torque and caverns for an agitated tank; the viscosity a motor reading implies.
 ///
 /// Bare numbers are SI (m, kg/m3, A, V, W); a speed needs its unit ('30 rpm', '0.5 rps').
+/// A flag beats the tank's latest journalled reading, which beats the site config.
 /// Exit 2 on bad input, and when a motor reading cannot give a viscosity (the answer is
 /// still printed, with the reason).
 #[derive(Debug, Args)]
@@ -14,9 +15,6 @@ pub struct MixArgs {
     /// Tank id from the site config (needs --site FILE).
     #[arg(long, value_name = "ID")]
     pub tank: Option<String>,
-    /// Product in the tank, when not the one the site says it holds.
-    #[arg(long, value_name = "NAME")]
-    pub product: Option<String>,
     /// rushton-turbine, pitched-blade-turbine, propeller, hydrofoil, anchor or helical-ribbon.
     #[arg(long, value_name = "TYPE")]
     pub impeller: Option<String>,
@@ -29,8 +27,10 @@ pub struct MixArgs {
     /// Product density (bare number: kg/m3).
     #[arg(long, value_name = "DENSITY")]
     pub density: Option<String>,
+    /// The flow curve: flags, `--journal FILE` (also the tank's latest spot readings), or the
+    /// product's nominal constants; `--product` names another product than the tank's.
     #[command(flatten)]
-    pub rheology: RheologyArgs,
+    pub source: RheologySourceArgs,
     /// Tank diameter (bare number: m).
     #[arg(long = "tank-diameter", value_name = "LENGTH")]
     pub tank_diameter: Option<String>,
