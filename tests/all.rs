@@ -18,6 +18,7 @@ mod rheology_choice;
 mod rheology_errors;
 mod rheology_props;
 mod rheology_temperature;
+mod session_tank;
 mod site;
 mod site_tank;
 mod trend;
