@@ -4,6 +4,7 @@
 
 use super::curve::Regime;
 use super::error::{MixError, fraction, positive};
+use super::impeller::Spread;
 use super::power::{Fluid, Vessel, check_speed};
 use crate::rheology::Model;
 use serde::Serialize;
@@ -104,6 +105,9 @@ pub struct FromPower {
     pub regime: Regime,
     pub effective_shear_rate_per_s: f64,
     pub apparent_viscosity_pa_s: f64,
+    /// μa over the ranges of Kp and the turbulent Np; `high` is infinite when some curve in
+    /// the range puts the point on its turbulent part.
+    pub apparent_viscosity_range_pa_s: Spread,
     /// d ln μa / d ln P: 1 when laminar; a 10 % power error is this many times 10 % in μa.
     pub sensitivity: f64,
     /// K (Pa·sⁿ) with n from the viscometer's model, or why not.
@@ -144,6 +148,7 @@ pub fn viscosity_from_power(
     };
     let rate = shape.ks * n;
     let mu = rho * n * d * d / re;
+    let range = viscosity_range(vessel, np, rho * n * d * d, mu)?;
     Ok(BackCalc::Done(FromPower {
         shaft_power_w,
         power_number: np,
@@ -151,9 +156,25 @@ pub fn viscosity_from_power(
         regime,
         effective_shear_rate_per_s: rate,
         apparent_viscosity_pa_s: mu,
+        apparent_viscosity_range_pa_s: range,
         sensitivity: shape.viscosity_sensitivity(regime),
         k: k_from_viscosity(&fluid.model, mu, rate),
     }))
+}
+
+/// μa = ρND²/Re on every corner curve; a corner where `np` is turbulent has no bound.
+fn viscosity_range(vessel: &Vessel, np: f64, rho_n_d2: f64, mu: f64) -> Result<Spread, MixError> {
+    let mut low = mu;
+    let mut high = mu;
+    for shape in vessel.power_curve()?.corners() {
+        let v = match shape.reynolds_at(np) {
+            Some((re, _)) => rho_n_d2 / re,
+            None => f64::INFINITY,
+        };
+        low = low.min(v);
+        high = high.max(v);
+    }
+    Ok(Spread::new(low, mu, high))
 }
 
 /// K from an apparent viscosity at `rate`, keeping the model's n and yield stress:

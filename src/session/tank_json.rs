@@ -122,6 +122,8 @@ fn motor(a: &TankAnswer, out: &mut Map<String, Value>) {
     put(out, "k_from_power_pa_sn", k.map_or(Value::Null, finite));
     if let Some(d) = done {
         put(out, "regime_from_power", json!(d.regime));
+        let r = &d.apparent_viscosity_range_pa_s;
+        put(out, "apparent_viscosity_from_power_range_pa_s", range(r));
         put(out, "viscosity_sensitivity", finite(d.sensitivity));
     }
     if let Some(c) = &m.comparison {

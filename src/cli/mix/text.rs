@@ -185,8 +185,10 @@ fn motor(s: &mut String, m: &MotorAnswer, sys: UnitSystem) {
         s,
         "Viscosity (motor)",
         &format!(
-            "{} ({})",
+            "{} ({} to {}; {})",
             viscosity(d.apparent_viscosity_pa_s, sys),
+            viscosity(d.apparent_viscosity_range_pa_s.low, sys),
+            upper(d.apparent_viscosity_range_pa_s.high, sys),
             tank_words::regime(d.regime)
         ),
     );
@@ -208,5 +210,14 @@ fn motor(s: &mut String, m: &MotorAnswer, sys: UnitSystem) {
             ),
         );
         let _ = writeln!(s, "  {}", tank_words::disagreement(c.agreement));
+    }
+}
+
+/// An upper bound that may be unbounded (the curve's turbulent part allows any viscosity).
+fn upper(pa_s: f64, sys: UnitSystem) -> String {
+    if pa_s.is_finite() {
+        viscosity(pa_s, sys)
+    } else {
+        "no upper bound".into()
     }
 }
