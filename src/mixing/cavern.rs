@@ -10,6 +10,7 @@
 //! at the operating point (Elson used the turbulent value). The 0.4 ratio is from memory.
 
 use super::error::{MixError, positive};
+use super::impeller::Spread;
 use super::power::{Fluid, Vessel, point_on};
 use serde::Serialize;
 use std::f64::consts::PI;
@@ -49,6 +50,8 @@ pub struct Cavern {
     pub yield_reynolds: f64,
     pub power_number: f64,
     pub diameter_m: f64,
+    /// Dc over the ranges of the curve's constants (through the power number).
+    pub diameter_range_m: Spread,
     pub height_m: f64,
     pub finding: Option<CavernFinding>,
     /// Share of the liquid inside the cavern (cylinder in cylinder), when the tank is known.
@@ -70,6 +73,7 @@ pub fn cavern(vessel: &Vessel, fluid: &Fluid, speed_rps: f64) -> Result<Option<C
     }
     let (re_y, po, dc) = diameter_at(vessel, fluid, speed_rps)?;
     let d = vessel.impeller_diameter_m;
+    let diameter_range_m = diameter_range(vessel, fluid, speed_rps, re_y, dc)?;
     let hc = ELSON_HEIGHT_RATIO * dc;
     let finding = vessel.tank_diameter_m.map(|t| match dc {
         x if x <= d => CavernFinding::WithinImpeller,
@@ -88,6 +92,7 @@ pub fn cavern(vessel: &Vessel, fluid: &Fluid, speed_rps: f64) -> Result<Option<C
         yield_reynolds: re_y,
         power_number: po,
         diameter_m: dc,
+        diameter_range_m,
         height_m: hc,
         finding,
         moving_volume_fraction: moving,
@@ -111,6 +116,25 @@ fn diameter_at(
         p.power_number,
         elson_diameter_m(p.power_number, re_y, d),
     ))
+}
+
+/// Dc on every corner curve of the constants' ranges.
+fn diameter_range(
+    vessel: &Vessel,
+    fluid: &Fluid,
+    speed_rps: f64,
+    re_y: f64,
+    dc: f64,
+) -> Result<Spread, MixError> {
+    let d = vessel.impeller_diameter_m;
+    let (mut low, mut high) = (dc, dc);
+    for shape in vessel.power_curve()?.corners() {
+        let po = point_on(&shape, d, fluid, speed_rps)?.power_number;
+        let x = elson_diameter_m(po, re_y, d);
+        low = low.min(x);
+        high = high.max(x);
+    }
+    Ok(Spread::new(low, dc, high))
 }
 
 /// The speed at which Dc = T, by bisection on log N. Po·Re_y is proportional to the shaft

@@ -5,7 +5,10 @@ use super::error::MixError;
 use super::impeller::{ImpellerKind, Spread};
 use serde::Serialize;
 
-/// Whether the tank wall carries baffles.
+/// Whether the tank wall carries baffles. Only the turbulent power number depends on it:
+/// laminar power is the same with or without baffles, and the transition moves little (from
+/// memory). Unbaffled, the swirl and the surface vortex make power depend on the Froude
+/// number too (Rushton, Costich & Everett 1950), which the table values do not carry.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
 #[serde(rename_all = "kebab-case")]
 pub enum Baffling {

@@ -9,6 +9,10 @@ use crate::mixing::{
     LoadVerdict, MixError, Operating, PowerCurve, Refusal, Regime, WallSpeed,
 };
 
+/// A cavern at the wall holding less than this share of the liquid still leaves product
+/// above or below it standing (our own threshold, no source).
+pub const MOSTLY_MOVING: f64 = 0.95;
+
 /// Points on the chart's power curve.
 pub const CHART_POINTS: usize = 80;
 
@@ -167,9 +171,15 @@ fn cavern_findings(a: &TankAnswer, out: &mut Vec<TankFinding>) {
     if a.request.vessel.impeller.sweeps_wall() {
         out.push(TankFinding::CavernCloseClearance);
     }
-    if let Some(f) = c.finding.filter(|f| *f != CavernFinding::ReachesWall) {
+    let short_of_level = c.moving_volume_fraction.is_some_and(|m| m < MOSTLY_MOVING);
+    let stagnant = match c.finding {
+        Some(CavernFinding::ReachesWall) => short_of_level,
+        Some(_) => true,
+        None => false,
+    };
+    if let (true, Some(finding)) = (stagnant, c.finding) {
         out.push(TankFinding::Stagnant {
-            finding: f,
+            finding,
             moving: c.moving_volume_fraction,
         });
     }

@@ -102,7 +102,13 @@ fn constants(a: &TankAnswer) -> Value {
 fn cavern(a: &TankAnswer, out: &mut Map<String, Value>) {
     let Some(c) = &a.cavern else { return };
     put(out, "cavern_diameter_m", finite(c.diameter_m));
+    put(out, "cavern_diameter_range_m", range(&c.diameter_range_m));
     put(out, "cavern_height_m", finite(c.height_m));
+    put(
+        out,
+        "cavern_moving_volume_fraction",
+        c.moving_volume_fraction.map_or(Value::Null, finite),
+    );
     put(out, "cavern_finding", json!(c.finding));
     let wall = a.speed_to_wall_rps();
     put(

@@ -120,7 +120,11 @@ fn stagnant(finding: CavernFinding, moving: Option<f64>) -> String {
             "Stagnant product: the product hardly moves beyond the blades{share}; raise the speed \
              or heat the product to lower its yield stress."
         ),
-        _ => format!(
+        CavernFinding::ReachesWall => format!(
+            "Stagnant product: the cavern reaches the wall but not the whole liquid height{share}; \
+             product above and below it does not turn over."
+        ),
+        CavernFinding::StagnantRing => format!(
             "Stagnant product: the cavern does not reach the wall{share}; product near the wall \
              and above the cavern does not turn over."
         ),

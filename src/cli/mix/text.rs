@@ -163,8 +163,10 @@ fn cavern(s: &mut String, a: &TankAnswer, c: &Cavern, sys: UnitSystem) {
         s,
         "Cavern (Elson)",
         &format!(
-            "{} across, {} high{against}",
+            "{} across ({} to {}), {} high{against}",
             length(c.diameter_m, sys),
+            length(c.diameter_range_m.low, sys),
+            length(c.diameter_range_m.high, sys),
             length(c.height_m, sys)
         ),
     );
