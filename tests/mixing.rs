@@ -254,3 +254,41 @@ fn the_drive_limits_are_checked_at_the_range_ends() {
     // The range brackets the nominal value: Kp 65–75 gives 5.2–6.0 W.
     assert!(rel(op.power_w.low, 5.2) < 1e-12 && rel(op.power_w.high, 6.0) < 1e-12);
 }
+
+#[test]
+fn the_wall_speed_matches_elsons_closed_form_when_turbulent() {
+    // Derived from Elson's torque balance with Dc = T and a constant (turbulent) power
+    // number: N = √[(T/D)³·π²(0.4 + 1/3)·τ0/(Po·ρ·D²)]. Disc turbine, D = 0.1 m in a 1 m
+    // tank, τ0 = 5 Pa, ρ = 1000 kg/m³, Po = 5.5: N = √(1000·π²·0.7333·5/(5.5·1000·0.01))
+    // = 25.65 rev/s; there Re ≈ 1.5·10⁴, so the power number is the turbulent one.
+    let v = vessel(ImpellerKind::RushtonTurbine, 0.1, Some(1.0));
+    let fluid = Fluid {
+        density_kg_m3: 1000.0,
+        model: Model::Bingham {
+            tau0: 5.0,
+            mu_p: 1e-4,
+        },
+    };
+    let c = mixing::cavern(&v, &fluid, 5.0).unwrap().unwrap();
+    let Some(WallSpeed::Rps(n)) = c.speed_to_wall else {
+        panic!("{:?}", c.speed_to_wall);
+    };
+    let closed = (1000.0 * PI * PI * (0.4 + 1.0 / 3.0) * 5.0 / (5.5 * 1000.0 * 0.01)).sqrt();
+    assert!(rel(n, closed) < 1e-6, "{n} vs {closed}");
+    assert!(rel(closed, 25.65) < 1e-3);
+    let at = mixing::operate(&v, &Drive::default(), &fluid, n).unwrap();
+    assert_eq!(at.point.regime, Regime::Turbulent);
+}
+
+#[test]
+fn the_transitional_bridge_meets_both_ends() {
+    // Our own bridge (no source) must equal Kp/Re at Re_L and the turbulent Np at Re_T.
+    for imp in ImpellerKind::ALL {
+        let curve = vessel(imp, 0.5, Some(1.0)).power_curve().unwrap();
+        let s = curve.nominal();
+        let at_l = s.power_number(s.re_laminar_below);
+        assert!(rel(at_l, s.kp / s.re_laminar_below) < 1e-12, "{imp:?}");
+        let just_below_t = s.power_number(s.re_turbulent_above * (1.0 - 1e-12));
+        assert!(rel(just_below_t, s.np_turbulent) < 1e-9, "{imp:?}");
+    }
+}
