@@ -9,92 +9,9 @@ use std::fmt::Write as _;
 
 pub(super) fn table(a: &TankAnswer, sys: UnitSystem) -> String {
     let mut s = String::new();
-    let p = &a.operating.point;
-    let v = &a.request.vessel;
-    let len = |m: f64| length(m, sys);
-    let tank = v.tank_diameter_m.map_or("tank size not given".into(), |t| {
-        format!("in a {} tank", len(t))
-    });
-    let _ = writeln!(
-        s,
-        "{} impeller, {} across, {tank}",
-        v.impeller.name(),
-        len(v.impeller_diameter_m)
-    );
-    let speed = units::format(
-        p.speed_rps * 2.0 * std::f64::consts::PI,
-        Dimension::Speed,
-        sys,
-    );
-    row(
-        &mut s,
-        "Speed",
-        &format!("{speed} ({} rev/s)", significant(p.speed_rps)),
-    );
-    let ks = &a.curve.ks.spread;
-    row(
-        &mut s,
-        "Effective shear rate",
-        &format!(
-            "{} 1/s (ks {}, {} to {})",
-            significant(p.effective_shear_rate_per_s),
-            significant(ks.value),
-            significant(ks.low),
-            significant(ks.high)
-        ),
-    );
-    row(
-        &mut s,
-        "Apparent viscosity",
-        &viscosity(p.apparent_viscosity_pa_s, sys),
-    );
-    row(
-        &mut s,
-        "Reynolds number",
-        &format!(
-            "{} ({})",
-            significant(p.reynolds),
-            tank_words::regime(p.regime)
-        ),
-    );
-    row(&mut s, "Power number", &significant(p.power_number));
-    row(
-        &mut s,
-        "Power",
-        &ranged(&a.operating.power_w, Dimension::Power, sys),
-    );
-    row(
-        &mut s,
-        "Shaft torque",
-        &ranged(&a.operating.torque_n_m, Dimension::Torque, sys),
-    );
-    if let (Some(sp), Some(b)) = (
-        a.operating.specific_power_w_m3,
-        a.operating.specific_power_band,
-    ) {
-        let kw = |x: f64| significant(x / 1000.0);
-        row(
-            &mut s,
-            "Power per volume",
-            &format!(
-                "{} kW/m3 ({} to {}): {}",
-                kw(sp.value),
-                kw(sp.low),
-                kw(sp.high),
-                tank_words::band(b)
-            ),
-        );
-    }
-    if let Some(m) = &a.operating.motor {
-        row(
-            &mut s,
-            "Motor",
-            &limit(m, Dimension::Power, sys, "needed of a"),
-        );
-    }
-    if let Some(g) = &a.operating.gearbox {
-        row(&mut s, "Gearbox", &limit(g, Dimension::Torque, sys, "of a"));
-    }
+    header(&mut s, a, sys);
+    point(&mut s, a, sys);
+    power(&mut s, a, sys);
     if let Some(c) = &a.cavern {
         cavern(&mut s, a, c, sys);
     }
@@ -105,6 +22,82 @@ pub(super) fn table(a: &TankAnswer, sys: UnitSystem) -> String {
     let cautions: Vec<String> = CAUTIONS.iter().map(|c| c.to_string()).collect();
     list(&mut s, "Cautions", &cautions);
     s
+}
+
+fn header(s: &mut String, a: &TankAnswer, sys: UnitSystem) {
+    let v = &a.request.vessel;
+    let tank = v.tank_diameter_m.map_or("tank size not given".into(), |t| {
+        format!("in a {} tank", length(t, sys))
+    });
+    let imp = v.impeller.name();
+    let d = length(v.impeller_diameter_m, sys);
+    let _ = writeln!(s, "{imp} impeller, {d} across, {tank}");
+}
+
+/// Speed, shear rate, viscosity and the regime.
+fn point(s: &mut String, a: &TankAnswer, sys: UnitSystem) {
+    let p = &a.operating.point;
+    let speed = speed(p.speed_rps, sys);
+    row(
+        s,
+        "Speed",
+        &format!("{speed} ({} rev/s)", significant(p.speed_rps)),
+    );
+    let ks = &a.curve.ks.spread;
+    let rate = significant(p.effective_shear_rate_per_s);
+    let (k, lo, hi) = (
+        significant(ks.value),
+        significant(ks.low),
+        significant(ks.high),
+    );
+    row(
+        s,
+        "Effective shear rate",
+        &format!("{rate} 1/s (ks {k}, {lo} to {hi})"),
+    );
+    row(
+        s,
+        "Apparent viscosity",
+        &viscosity(p.apparent_viscosity_pa_s, sys),
+    );
+    let regime = tank_words::regime(p.regime);
+    row(
+        s,
+        "Reynolds number",
+        &format!("{} ({regime})", significant(p.reynolds)),
+    );
+    row(s, "Power number", &significant(p.power_number));
+}
+
+/// Power, torque, power per volume and the drive's limits.
+fn power(s: &mut String, a: &TankAnswer, sys: UnitSystem) {
+    let op = &a.operating;
+    row(s, "Power", &ranged(&op.power_w, Dimension::Power, sys));
+    row(
+        s,
+        "Shaft torque",
+        &ranged(&op.torque_n_m, Dimension::Torque, sys),
+    );
+    if let (Some(sp), Some(b)) = (op.specific_power_w_m3, op.specific_power_band) {
+        let kw = |x: f64| significant(x / 1000.0);
+        let (v, lo, hi) = (kw(sp.value), kw(sp.low), kw(sp.high));
+        let band = tank_words::band(b);
+        row(
+            s,
+            "Power per volume",
+            &format!("{v} kW/m3 ({lo} to {hi}): {band}"),
+        );
+    }
+    if let Some(m) = &op.motor {
+        row(s, "Motor", &limit(m, Dimension::Power, sys, "needed of a"));
+    }
+    if let Some(g) = &op.gearbox {
+        row(s, "Gearbox", &limit(g, Dimension::Torque, sys, "of a"));
+    }
+}
+
+fn speed(rps: f64, sys: UnitSystem) -> String {
+    units::format(rps * 2.0 * std::f64::consts::PI, Dimension::Speed, sys)
 }
 
 fn row(s: &mut String, label: &str, value: &str) {
@@ -171,8 +164,11 @@ fn cavern(s: &mut String, a: &TankAnswer, c: &Cavern, sys: UnitSystem) {
         ),
     );
     if let Some(n) = a.speed_to_wall_rps() {
-        let w = units::format(n * 2.0 * std::f64::consts::PI, Dimension::Speed, sys);
-        row(s, "Cavern at the wall", &format!("from about {w}"));
+        row(
+            s,
+            "Cavern at the wall",
+            &format!("from about {}", speed(n, sys)),
+        );
     }
 }
 
