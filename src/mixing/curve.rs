@@ -52,7 +52,8 @@ pub struct Overrides {
     pub np_turbulent: Option<f64>,
 }
 
-/// Scatter assumed around a Rieger Kp: ±15 %, from memory (typical of such correlations).
+/// Scatter assumed around a Rieger Kp: ±15 %. Our own allowance, no source: the
+/// correlation's own error band is not known here.
 pub const RIEGER_SCATTER: f64 = 0.15;
 
 /// One impeller's curve in one tank, with the range of each constant.
