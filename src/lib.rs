@@ -12,6 +12,8 @@ pub mod rheology;
 
 pub mod instrument;
 
+pub mod mixing;
+
 pub mod site;
 
 pub mod journal;

@@ -5,18 +5,24 @@
 mod support;
 
 mod cli_fit;
+mod cli_mix;
 mod hub;
 mod instrument;
 mod journal;
 mod journal_crash;
 mod layering;
+mod mixing;
+mod mixing_props;
+mod mixing_refs;
 mod report;
 mod rheology;
 mod rheology_choice;
 mod rheology_errors;
 mod rheology_props;
 mod rheology_temperature;
+mod session_tank;
 mod site;
+mod site_tank;
 mod trend;
 mod tui_e2e;
 mod tui_keys;

@@ -43,6 +43,8 @@ pub enum Command {
     Report(ReportArgs),
     /// A product's fitted constants over past sessions, against its spec limits.
     Trend(TrendArgs),
+    /// Power, torque and caverns for an agitated tank; viscosity from a motor reading.
+    Mix(Box<super::mix::args::MixArgs>),
 }
 
 impl Command {
@@ -54,6 +56,7 @@ impl Command {
             Command::Record(_) => "record",
             Command::Report(_) => "report",
             Command::Trend(_) => "trend",
+            Command::Mix(_) => "mix",
         }
     }
 }

@@ -7,6 +7,7 @@ mod check_site;
 mod fit;
 mod fit_csv;
 mod fit_output;
+mod mix;
 mod record;
 mod report;
 pub mod rheology_args;
@@ -29,6 +30,7 @@ pub fn run(cli: &Cli, command: &Command) -> anyhow::Result<ExitCode> {
         Command::Record(a) => record::run(cli, a),
         Command::Report(a) => report::run(cli, a),
         Command::Trend(a) => trend::run(cli, a),
+        Command::Mix(a) => mix::run(cli, a),
     }
 }
 

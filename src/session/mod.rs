@@ -5,7 +5,14 @@
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
 pub mod flow_curve;
+pub mod rheology_source;
 pub mod state;
+pub mod tank;
+pub mod tank_input;
+pub mod tank_json;
+mod tank_motor;
+mod tank_readings;
+pub mod tank_words;
 pub mod temperature;
 pub mod trend;
 

@@ -17,6 +17,7 @@ mod raw;
 mod suggest;
 mod summary;
 mod tank;
+mod tank_impeller;
 #[cfg(test)]
 mod tests;
 mod values;
@@ -25,7 +26,7 @@ mod viscometer;
 pub use errors::{ErrorKind, SiteError, SiteErrors};
 pub use model::{
     Baffles, CurvePoint, EquipmentKind, GelBuildUp, Impeller, LimitProperty, Line, Product, Pump,
-    PumpKind, Site, SpecLimit, Tank, Viscometer,
+    PumpKind, RibbonShape, Site, SpecLimit, Tank, TankConstants, Viscometer,
 };
 pub use pump::MIN_CURVE_POINTS;
 pub use summary::summary;
@@ -142,7 +143,7 @@ fn build(root_value: &raw::Value<'_>, sink: &mut Sink, path_label: &str) -> Opti
         viscometers: root.tables("viscometer", viscometer::VISCOMETER_KEYS, sink),
         lines: root.tables("line", line::LINE_KEYS, sink),
         pumps: root.tables("pump", pump::PUMP_KEYS, sink),
-        tanks: root.tables("tank", tank::TANK_KEYS, sink),
+        tanks: root.tables("tank", &tank::keys(), sink),
     };
     cross::check(&tables, sink);
     let header = header.map(|h| site_header(h, sink));

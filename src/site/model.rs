@@ -221,6 +221,32 @@ pub struct Tank {
     pub gearbox_efficiency: Option<f64>,
     /// `None` for a direct drive with no gearbox.
     pub gearbox_torque_limit_n_m: Option<f64>,
+    /// Shaft power with the impeller turning in an empty tank (bearings, seals, gears), W.
+    pub no_load_power_w: Option<f64>,
+    /// The site's own impeller constants, replacing the published ones.
+    pub constants: TankConstants,
+    /// A helical ribbon's shape, for its Kp by correlation.
+    pub ribbon: Option<RibbonShape>,
+}
+
+/// Impeller constants a site knows for its own impeller (each optional).
+#[derive(Debug, Clone, Copy, PartialEq, Default, Serialize)]
+pub struct TankConstants {
+    /// Metzner–Otto ks: effective shear rate = ks × speed in rev/s.
+    pub ks: Option<f64>,
+    /// Laminar Kp = power number × Reynolds number.
+    pub kp: Option<f64>,
+    /// Turbulent power number in this tank.
+    pub np_turbulent: Option<f64>,
+}
+
+/// A helical ribbon's shape, SI.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct RibbonShape {
+    pub height_m: f64,
+    pub pitch_m: f64,
+    pub width_m: f64,
+    pub blades: u32,
 }
 
 /// The kinds of equipment that carry ids (one id space across all of them).

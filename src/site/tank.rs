@@ -4,9 +4,11 @@ use super::errors::{ErrorKind, Sink};
 use super::fields::{Need, Rule};
 use super::model::{Baffles, Impeller, Tank};
 use super::raw::RawTable;
+use super::tank_impeller;
 use crate::units::Dimension;
 
-pub(crate) const TANK_KEYS: &[&str] = &[
+/// The required and nameplate keys; [`tank_impeller::KEYS`] adds the optional constants.
+const BASE_KEYS: &[&str] = &[
     "id",
     "description",
     "product",
@@ -23,6 +25,15 @@ pub(crate) const TANK_KEYS: &[&str] = &[
     "gearbox_efficiency",
     "gearbox_torque_limit",
 ];
+
+/// Every key a `[[tank]]` table may hold.
+pub(crate) fn keys() -> Vec<&'static str> {
+    BASE_KEYS
+        .iter()
+        .chain(tank_impeller::KEYS)
+        .copied()
+        .collect()
+}
 
 pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Tank> {
     let (id, description) = t.identity(sink);
@@ -48,6 +59,9 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Tank> {
         Rule::Positive,
         Need::Optional,
     );
+    let constants = tank_impeller::constants(&t, sink);
+    let no_load = tank_impeller::no_load_power(&t, sink);
+    let ribbon = tank_impeller::ribbon(&t, sink, impeller);
     Some(Tank {
         id: id?,
         description,
@@ -68,6 +82,9 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Tank> {
         motor_efficiency: motor.efficiency?,
         gearbox_efficiency: gear_eff,
         gearbox_torque_limit_n_m: torque,
+        no_load_power_w: no_load,
+        constants,
+        ribbon,
     })
 }
 
