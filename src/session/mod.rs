@@ -5,8 +5,15 @@
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
 pub mod flow_curve;
+pub mod duration;
 pub mod json;
+pub mod pump;
 pub mod state;
+pub mod restart;
+mod restart_notes;
+mod restart_site;
+pub mod restart_words;
+pub mod system_curve;
 pub mod temperature;
 pub mod trend;
 

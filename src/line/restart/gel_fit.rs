@@ -58,6 +58,8 @@ pub enum GelFitKind {
     TwoReadingsTimeConstantGiven,
     /// Two readings; the time constant was assumed equal to the longer rest time.
     TwoReadingsTimeConstantAssumed,
+    /// Given directly (the site's constants, flags), not fitted.
+    Given,
     /// Fitted, but the gel was still building at the longest rest: tr was held at its cap
     /// and τ∞ is an extrapolation.
     StillBuilding,
@@ -123,7 +125,7 @@ impl GelFit {
     pub fn given(curve: GelCurve) -> GelFit {
         GelFit {
             curve,
-            kind: GelFitKind::TwoReadingsTimeConstantGiven,
+            kind: GelFitKind::Given,
             covariance: None,
             coverage: 0.0,
             basis: IntervalBasis::None,
