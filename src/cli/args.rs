@@ -43,6 +43,10 @@ pub enum Command {
     Report(ReportArgs),
     /// A product's fitted constants over past sessions, against its spec limits.
     Trend(TrendArgs),
+    /// Will a line restart after a stop, and the longest safe stop (gel build-up at rest).
+    Restart(super::restart::RestartArgs),
+    /// A pump on a viscous product: ANSI/HI 9.6.7 correction, duty point, PD slip and relief.
+    Pump(super::pump::PumpArgs),
 }
 
 #[derive(Debug, Args)]

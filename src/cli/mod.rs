@@ -6,8 +6,13 @@ mod check_site;
 mod fit;
 mod fit_csv;
 mod fit_output;
+mod gel_csv;
+mod pump;
+mod pump_output;
 mod record;
 mod report;
+mod restart;
+mod restart_json;
 pub mod rheology_args;
 mod trend;
 
@@ -29,6 +34,8 @@ pub fn main() -> ExitCode {
         Some(Command::Record(a)) => record::run(&cli, a),
         Some(Command::Report(a)) => report::run(&cli, a),
         Some(Command::Trend(a)) => trend::run(&cli, a),
+        Some(Command::Restart(a)) => restart::run(&cli, a),
+        Some(Command::Pump(a)) => pump::run(&cli, a),
     };
     match outcome {
         Ok(code) => code,

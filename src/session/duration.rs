@@ -15,7 +15,9 @@ pub enum DurationError {
 /// Seconds from text such as "1 h 30 min": numbers each followed by a time unit, summed.
 pub fn parse_duration(text: &str) -> Result<f64, DurationError> {
     let shown = crate::text::sanitize(text.trim(), false);
-    let bad = || DurationError::NotADuration { text: shown.clone() };
+    let bad = || DurationError::NotADuration {
+        text: shown.clone(),
+    };
     let pieces = pieces(text.trim()).ok_or_else(bad)?;
     if pieces.is_empty() {
         return Err(bad());
@@ -24,7 +26,9 @@ pub fn parse_duration(text: &str) -> Result<f64, DurationError> {
     for piece in &pieces {
         let s = units::parse(piece, Dimension::Time).map_err(|_| bad())?;
         if s < 0.0 {
-            return Err(DurationError::Negative { text: shown.clone() });
+            return Err(DurationError::Negative {
+                text: shown.clone(),
+            });
         }
         total += s;
     }
@@ -50,7 +54,10 @@ fn pieces(text: &str) -> Option<Vec<String>> {
             return None;
         }
         out.push(format!("{} {}", &rest[..num_end], &after[..unit_end]));
-        rest = after[unit_end..].trim_start().trim_start_matches(',').trim_start();
+        rest = after[unit_end..]
+            .trim_start()
+            .trim_start_matches(',')
+            .trim_start();
     }
     Some(out)
 }
@@ -86,7 +93,10 @@ mod tests {
         assert_eq!(parse_duration("2 d"), Ok(172_800.0));
         assert!(parse_duration("90").is_err());
         assert!(parse_duration("soon").is_err());
-        assert!(matches!(parse_duration("-2 h"), Err(DurationError::Negative { .. })));
+        assert!(matches!(
+            parse_duration("-2 h"),
+            Err(DurationError::Negative { .. })
+        ));
     }
 
     #[test]

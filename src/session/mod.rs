@@ -4,15 +4,16 @@
 //! `rheoside fit` and a number drawn on screen come from the same code path. Later
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
-pub mod flow_curve;
 pub mod duration;
+pub mod flow_curve;
 pub mod json;
 pub mod pump;
-pub mod state;
+pub mod pump_words;
 pub mod restart;
 mod restart_notes;
 mod restart_site;
 pub mod restart_words;
+pub mod state;
 pub mod system_curve;
 pub mod temperature;
 pub mod trend;

@@ -4,8 +4,8 @@
 
 use super::system_curve::{Regime, line_pressure_pa, regime};
 use crate::pump::{
-    Correction, DisplacementPump, Duty, G, HiWarning, NoDuty, PdDuty, PumpCurve, PumpPoint,
-    Relief, SlipBasis, SystemCurve, correction, operating_point, pd_duty,
+    Correction, DisplacementPump, Duty, G, HiWarning, NoDuty, PdDuty, PumpCurve, PumpPoint, Relief,
+    SlipBasis, SystemCurve, correction, operating_point, pd_duty,
 };
 use crate::rheology::Model;
 use crate::site::{Line, Pump, PumpKind, Site};
@@ -51,7 +51,11 @@ pub struct BepAnswer {
 pub fn at_bep(nu_cst: f64, bep: PumpPoint, speed_rpm: f64, density: Option<f64>) -> BepAnswer {
     let c = correction(nu_cst, bep.flow_m3_s * 3600.0, bep.head_m, speed_rpm);
     let rho = density.unwrap_or(WATER_DENSITY);
-    let (q, h, eta) = (bep.flow_m3_s * c.c_q, bep.head_m * c.c_h_bep, bep.efficiency * c.c_eta);
+    let (q, h, eta) = (
+        bep.flow_m3_s * c.c_q,
+        bep.head_m * c.c_h_bep,
+        bep.efficiency * c.c_eta,
+    );
     let mut notes = hi_notes(&c);
     if density.is_none() {
         notes.push(PumpNote::DensityAssumedWater);
@@ -142,23 +146,42 @@ pub enum PumpSetupError {
 /// Answer a site pump on its line.
 pub fn on_site(q: &SitePump) -> Result<SitePumpAnswer, PumpSetupError> {
     let site = q.site;
-    let pump = site.pump(q.pump_id).ok_or_else(|| PumpSetupError::UnknownPump {
-        id: q.pump_id.into(),
-        known: site.pumps.iter().map(|p| p.id.as_str()).collect::<Vec<_>>().join(", "),
-    })?;
-    let product = site.product(q.product).ok_or_else(|| PumpSetupError::UnknownProduct {
-        name: q.product.into(),
-        known: site.products.iter().map(|p| p.name.as_str()).collect::<Vec<_>>().join(", "),
-    })?;
-    let line = site.line(&pump.feeds).ok_or_else(|| PumpSetupError::NoLine {
-        pump: pump.id.clone(),
-        line: pump.feeds.clone(),
-    })?;
+    let pump = site
+        .pump(q.pump_id)
+        .ok_or_else(|| PumpSetupError::UnknownPump {
+            id: q.pump_id.into(),
+            known: site
+                .pumps
+                .iter()
+                .map(|p| p.id.as_str())
+                .collect::<Vec<_>>()
+                .join(", "),
+        })?;
+    let product = site
+        .product(q.product)
+        .ok_or_else(|| PumpSetupError::UnknownProduct {
+            name: q.product.into(),
+            known: site
+                .products
+                .iter()
+                .map(|p| p.name.as_str())
+                .collect::<Vec<_>>()
+                .join(", "),
+        })?;
+    let line = site
+        .line(&pump.feeds)
+        .ok_or_else(|| PumpSetupError::NoLine {
+            pump: pump.id.clone(),
+            line: pump.feeds.clone(),
+        })?;
     let rho = product.density_kg_m3;
     let mu = q.model.apparent_viscosity(q.shear_rate_per_s);
     let mut notes = vec![PumpNote::LaminarSystemCurveOnly];
-    if !matches!(q.model, Model::Newtonian { .. }) {
-        notes.push(PumpNote::NonNewtonianNotStandardized { shear_rate_per_s: q.shear_rate_per_s });
+    let non_newtonian = !matches!(q.model, Model::Newtonian { .. });
+    if non_newtonian && matches!(pump.kind, PumpKind::Centrifugal { .. }) {
+        notes.push(PumpNote::NonNewtonianNotStandardized {
+            shear_rate_per_s: q.shear_rate_per_s,
+        });
     }
     if shear_thickening(&q.model) {
         notes.push(PumpNote::ShearThickening);
@@ -167,9 +190,13 @@ pub fn on_site(q: &SitePump) -> Result<SitePumpAnswer, PumpSetupError> {
     let answer = match &pump.kind {
         PumpKind::Centrifugal { curve } => {
             let water = water_curve(pump, curve)?.at_speed(speed / pump.rated_speed_rad_s);
-            PumpAnswer::Centrifugal(centrifugal(&water, line, q, rho, mu, speed, pump, &mut notes))
+            PumpAnswer::Centrifugal(centrifugal(
+                &water, line, q, rho, mu, speed, pump, &mut notes,
+            ))
         }
-        PumpKind::PositiveDisplacement { displacement_m3_per_rev } => {
+        PumpKind::PositiveDisplacement {
+            displacement_m3_per_rev,
+        } => {
             let pd = DisplacementPump {
                 displacement_m3_per_rev: *displacement_m3_per_rev,
                 speed_rev_s: speed / (2.0 * std::f64::consts::PI),
@@ -180,17 +207,29 @@ pub fn on_site(q: &SitePump) -> Result<SitePumpAnswer, PumpSetupError> {
             PumpAnswer::Displacement(displacement(&pd, line, q, rho, mu, &mut notes))
         }
     };
-    Ok(SitePumpAnswer { pump_id: pump.id.clone(), line_id: line.id.clone(), answer, notes })
+    Ok(SitePumpAnswer {
+        pump_id: pump.id.clone(),
+        line_id: line.id.clone(),
+        answer,
+        notes,
+    })
 }
 
 fn shear_thickening(model: &Model) -> bool {
     matches!(model, Model::PowerLaw { n, .. } | Model::HerschelBulkley { n, .. } if *n > 1.0)
 }
 
-fn water_curve(pump: &Pump, curve: &[crate::site::CurvePoint]) -> Result<PumpCurve, PumpSetupError> {
+fn water_curve(
+    pump: &Pump,
+    curve: &[crate::site::CurvePoint],
+) -> Result<PumpCurve, PumpSetupError> {
     let points = curve
         .iter()
-        .map(|c| PumpPoint { flow_m3_s: c.flow_m3_s, head_m: c.head_m, efficiency: c.efficiency })
+        .map(|c| PumpPoint {
+            flow_m3_s: c.flow_m3_s,
+            head_m: c.head_m,
+            efficiency: c.efficiency,
+        })
         .collect();
     PumpCurve::new(points).ok_or_else(|| PumpSetupError::BadCurve(pump.id.clone()))
 }
@@ -212,7 +251,12 @@ fn centrifugal(
     notes.extend(bep.notes.iter().copied());
     let curve = water.corrected(&bep.correction);
     let system = |flow: f64| line_pressure_pa(line, &q.model, rho, flow) / (rho * G);
-    let duty = operating_point(&curve, &SystemCurve::Function(&system), rho, pump.motor_rating_w);
+    let duty = operating_point(
+        &curve,
+        &SystemCurve::Function(&system),
+        rho,
+        pump.motor_rating_w,
+    );
     let duty = duty.map_err(|why| notes.push(PumpNote::NoDuty(why))).ok();
     let regime = duty.map(|d| regime(line, &q.model, rho, d.flow_m3_s));
     if regime == Some(Regime::NotLaminar) {
@@ -222,8 +266,20 @@ fn centrifugal(
         notes.push(PumpNote::MotorOverloaded);
     }
     let top = curve.flow_range().1;
-    let system_points = (0..=30).map(|i| top * i as f64 / 30.0).map(|f| (f, system(f))).collect();
-    CentrifugalAnswer { bep, viscosity_pa_s: mu, nu_cst, water_curve: water.clone(), curve, duty, regime, system_points }
+    let system_points = (0..=30)
+        .map(|i| top * i as f64 / 30.0)
+        .map(|f| (f, system(f)))
+        .collect();
+    CentrifugalAnswer {
+        bep,
+        viscosity_pa_s: mu,
+        nu_cst,
+        water_curve: water.clone(),
+        curve,
+        duty,
+        regime,
+        system_points,
+    }
 }
 
 fn displacement(
@@ -243,7 +299,9 @@ fn displacement(
         notes.push(PumpNote::ReliefOpens);
     }
     if duty.pressure_speed_exponent > 1.0 {
-        notes.push(PumpNote::PressureRisesFasterThanSpeed { exponent: duty.pressure_speed_exponent });
+        notes.push(PumpNote::PressureRisesFasterThanSpeed {
+            exponent: duty.pressure_speed_exponent,
+        });
     }
     if duty.motor_margin_w.is_some_and(|m| m < 0.0) {
         notes.push(PumpNote::MotorOverloaded);
@@ -253,5 +311,10 @@ fn displacement(
     if regime == Regime::NotLaminar {
         notes.push(PumpNote::NotLaminar);
     }
-    DisplacementAnswer { duty, viscosity_pa_s: mu, regime, density_kg_m3: rho }
+    DisplacementAnswer {
+        duty,
+        viscosity_pa_s: mu,
+        regime,
+        density_kg_m3: rho,
+    }
 }

@@ -133,13 +133,23 @@ const LONG_REST_TIME_CONSTANTS: f64 = 20.0;
 pub fn analyse(input: RestartInput) -> Result<RestartAnswer, RestartError> {
     let now = case(&input, &input.gel)?;
     let cold = match input.cold {
-        Some(c) => Some(case(&input, &input.gel.scaled(c.gel_factor.unwrap_or(1.0)))?),
+        Some(c) => Some(case(
+            &input,
+            &input.gel.scaled(c.gel_factor.unwrap_or(1.0)),
+        )?),
         None => None,
     };
     let assumptions = super::restart_notes::assumptions(&input);
     let cautions = super::restart_notes::cautions(&input);
     let next_steps = super::restart_notes::next_steps(&input, &now, cold.as_ref());
-    Ok(RestartAnswer { input, now, cold, assumptions, cautions, next_steps })
+    Ok(RestartAnswer {
+        input,
+        now,
+        cold,
+        assumptions,
+        cautions,
+        next_steps,
+    })
 }
 
 fn case(input: &RestartInput, gel: &GelFit) -> Result<RestartCase, RestartError> {
@@ -147,7 +157,12 @@ fn case(input: &RestartInput, gel: &GelFit) -> Result<RestartCase, RestartError>
         .stopped_for_s
         .unwrap_or(LONG_REST_TIME_CONSTANTS * gel.curve.time_constant_s);
     let gel_stress_pa = gel.curve.stress_at(rest_s);
-    let check = check_restart(&input.line, gel_stress_pa, input.available_pa, input.design_pa)?;
+    let check = check_restart(
+        &input.line,
+        gel_stress_pa,
+        input.available_pa,
+        input.design_pa,
+    )?;
     let allowed_gel_pa = allowed_gel_stress(&input.line, check.usable_pa(), input.margin)?;
     let gel_band_pa = gel_band(gel, rest_s);
     let wall = input.line.wall_factor();
@@ -178,7 +193,11 @@ pub fn gel_points(gel: &GelFit, until_s: f64, n: usize) -> Vec<GelPoint> {
     (0..n)
         .map(|i| {
             let rest_s = until_s * i as f64 / (n - 1) as f64;
-            GelPoint { rest_s, stress_pa: gel.curve.stress_at(rest_s), band_pa: gel_band(gel, rest_s) }
+            GelPoint {
+                rest_s,
+                stress_pa: gel.curve.stress_at(rest_s),
+                band_pa: gel_band(gel, rest_s),
+            }
         })
         .collect()
 }
@@ -190,8 +209,16 @@ pub fn limit_gel_stress(answer: &RestartAnswer) -> f64 {
 }
 
 /// A build-up from flags: one stress for any stop, or the three constants.
-pub fn gel_from_constants(initial_pa: f64, final_pa: f64, time_constant_s: f64) -> Result<GelFit, RestartError> {
-    Ok(GelFit::given(GelCurve::new(initial_pa, final_pa, time_constant_s)?))
+pub fn gel_from_constants(
+    initial_pa: f64,
+    final_pa: f64,
+    time_constant_s: f64,
+) -> Result<GelFit, RestartError> {
+    Ok(GelFit::given(GelCurve::new(
+        initial_pa,
+        final_pa,
+        time_constant_s,
+    )?))
 }
 
 /// Whether the fit left no interval because of too few readings.

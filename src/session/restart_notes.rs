@@ -13,7 +13,10 @@ pub(super) fn assumptions(input: &RestartInput) -> Vec<Assumption> {
         out.push(Assumption::LongRestNoStopGiven);
     }
     out.extend(gel_assumptions(input));
-    out.push(Assumption::Margin { fraction: input.margin, default: input.margin_is_default });
+    out.push(Assumption::Margin {
+        fraction: input.margin,
+        default: input.margin_is_default,
+    });
     match input.limit_source {
         LimitSource::MotorTorque => out.push(Assumption::MotorNoLosses),
         LimitSource::ShutOffHead => out.push(Assumption::ShutOffUncorrected),
@@ -38,15 +41,17 @@ fn gel_assumptions(input: &RestartInput) -> Vec<Assumption> {
     let mut out = vec![Assumption::GelLinearInStructure];
     let tr = gel.curve.time_constant_s;
     match gel.kind {
-        GelFitKind::TwoReadingsTimeConstantAssumed => {
-            out.push(Assumption::TimeConstantAssumed { time_constant_s: tr })
-        }
-        GelFitKind::TwoReadingsTimeConstantGiven => {
-            out.push(Assumption::TimeConstantFromSite { time_constant_s: tr })
-        }
+        GelFitKind::TwoReadingsTimeConstantAssumed => out.push(Assumption::TimeConstantAssumed {
+            time_constant_s: tr,
+        }),
+        GelFitKind::TwoReadingsTimeConstantGiven => out.push(Assumption::TimeConstantFromSite {
+            time_constant_s: tr,
+        }),
         GelFitKind::StillBuilding => {
             let longest = gel.readings.last().map_or(0.0, |r| r.rest_s);
-            out.push(Assumption::StillBuilding { longest_rest_s: longest })
+            out.push(Assumption::StillBuilding {
+                longest_rest_s: longest,
+            })
         }
         _ => {}
     }
@@ -79,10 +84,15 @@ pub(super) fn cautions(input: &RestartInput) -> Vec<Caution> {
 }
 
 /// What to do next, from how the answer came out.
-pub(super) fn next_steps(input: &RestartInput, now: &RestartCase, cold: Option<&RestartCase>) -> Vec<NextStep> {
+pub(super) fn next_steps(
+    input: &RestartInput,
+    now: &RestartCase,
+    cold: Option<&RestartCase>,
+) -> Vec<NextStep> {
     let mut out = Vec::new();
     let stuck = now.check.outcome != Outcome::Restarts;
-    let limited = |c: &RestartCase| matches!(c.max_stop, MaxStop::After(_) | MaxStop::AlreadyTooLate);
+    let limited =
+        |c: &RestartCase| matches!(c.max_stop, MaxStop::After(_) | MaxStop::AlreadyTooLate);
     if stuck {
         out.extend([NextStep::WarmTheLine, NextStep::RestartInSections]);
         if input.line.static_pa + input.line.back_pressure_pa > 0.0 {

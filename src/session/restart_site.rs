@@ -32,7 +32,12 @@ pub enum RestartSetupError {
     #[error("product '{name}' is not in the site config; its products: {known}")]
     UnknownProduct { name: String, known: String },
     #[error("pump '{pump}' feeds line '{feeds}', not '{line}'; pumps on '{line}': {known}")]
-    PumpFeedsAnother { pump: String, feeds: String, line: String, known: String },
+    PumpFeedsAnother {
+        pump: String,
+        feeds: String,
+        line: String,
+        known: String,
+    },
     #[error(
         "product '{name}' has no gel build-up in the site config; give gel readings \
          (--gel-readings FILE.csv), the constants (--gel-initial, --gel-final, \
@@ -45,7 +50,11 @@ pub enum RestartSetupError {
 
 fn known<'a>(ids: impl Iterator<Item = &'a str>) -> String {
     let list: Vec<&str> = ids.collect();
-    if list.is_empty() { "none".into() } else { list.join(", ") }
+    if list.is_empty() {
+        "none".into()
+    } else {
+        list.join(", ")
+    }
 }
 
 /// Find the line, pump and product on the site.
@@ -55,14 +64,18 @@ pub fn lookup<'a>(
     pump_id: &str,
     product: &str,
 ) -> Result<(&'a Line, &'a Pump, &'a Product), RestartSetupError> {
-    let line = site.line(line_id).ok_or_else(|| RestartSetupError::UnknownLine {
-        id: line_id.into(),
-        known: known(site.lines.iter().map(|l| l.id.as_str())),
-    })?;
-    let pump = site.pump(pump_id).ok_or_else(|| RestartSetupError::UnknownPump {
-        id: pump_id.into(),
-        known: known(site.pumps.iter().map(|p| p.id.as_str())),
-    })?;
+    let line = site
+        .line(line_id)
+        .ok_or_else(|| RestartSetupError::UnknownLine {
+            id: line_id.into(),
+            known: known(site.lines.iter().map(|l| l.id.as_str())),
+        })?;
+    let pump = site
+        .pump(pump_id)
+        .ok_or_else(|| RestartSetupError::UnknownPump {
+            id: pump_id.into(),
+            known: known(site.pumps.iter().map(|p| p.id.as_str())),
+        })?;
     if pump.feeds != line.id {
         return Err(RestartSetupError::PumpFeedsAnother {
             pump: pump.id.clone(),
@@ -71,10 +84,12 @@ pub fn lookup<'a>(
             known: known(site.pumps_feeding(&line.id).iter().map(|p| p.id.as_str())),
         });
     }
-    let product = site.product(product).ok_or_else(|| RestartSetupError::UnknownProduct {
-        name: product.into(),
-        known: known(site.products.iter().map(|p| p.name.as_str())),
-    })?;
+    let product = site
+        .product(product)
+        .ok_or_else(|| RestartSetupError::UnknownProduct {
+            name: product.into(),
+            known: known(site.products.iter().map(|p| p.name.as_str())),
+        })?;
     Ok((line, pump, product))
 }
 
@@ -113,14 +128,21 @@ pub fn from_site(
 
 /// The most the pump can give at the discharge, and what sets it.
 pub fn pump_limit(pump: &Pump, density: f64) -> (f64, LimitSource) {
-    let casing = pump.max_discharge_pressure_pa.map(|p| (p, LimitSource::CasingLimit));
+    let casing = pump
+        .max_discharge_pressure_pa
+        .map(|p| (p, LimitSource::CasingLimit));
     let relief = pump.relief_setting_pa.map(|p| (p, LimitSource::Relief));
     let own = match &pump.kind {
-        PumpKind::PositiveDisplacement { displacement_m3_per_rev } => {
+        PumpKind::PositiveDisplacement {
+            displacement_m3_per_rev,
+        } => {
             // T = P/ω at rated speed; ΔP = 2π·T/V_d (no mechanical losses).
             pump.motor_rating_w.map(|w| {
                 let torque = w / pump.rated_speed_rad_s;
-                (2.0 * std::f64::consts::PI * torque / displacement_m3_per_rev, LimitSource::MotorTorque)
+                (
+                    2.0 * std::f64::consts::PI * torque / displacement_m3_per_rev,
+                    LimitSource::MotorTorque,
+                )
             })
         }
         PumpKind::Centrifugal { curve } => {
@@ -139,13 +161,18 @@ fn gel_fit(source: GelSource, product: &Product) -> Result<GelFit, RestartSetupE
     let site_tr = product.gel.map(|g| g.rebuild_time_s);
     Ok(match source {
         GelSource::Readings(readings) => {
-            let opts = GelFitOptions { time_constant_s: site_tr, ..GelFitOptions::default() };
+            let opts = GelFitOptions {
+                time_constant_s: site_tr,
+                ..GelFitOptions::default()
+            };
             fit_gel(&readings, &opts)?
         }
         GelSource::Constants(a, b, tr) => super::restart::gel_from_constants(a, b, tr)?,
         GelSource::Stress(s) => super::restart::gel_from_constants(s, s, 1.0)?,
         GelSource::Product => {
-            let g = product.gel.ok_or_else(|| RestartSetupError::NoGel { name: product.name.clone() })?;
+            let g = product.gel.ok_or_else(|| RestartSetupError::NoGel {
+                name: product.name.clone(),
+            })?;
             super::restart::gel_from_constants(g.initial_pa, g.long_rest_pa, g.rebuild_time_s)?
         }
     })
@@ -156,5 +183,9 @@ fn cold_case(line: &Line, product: &Product) -> Option<ColdCase> {
     let consistency_factor = product
         .activation_energy_j_mol
         .map(|ea| arrhenius_factor(ea, t, product.reference_temperature_k));
-    Some(ColdCase { temperature_k: t, gel_factor: line.gel_cold_factor, consistency_factor })
+    Some(ColdCase {
+        temperature_k: t,
+        gel_factor: line.gel_cold_factor,
+        consistency_factor,
+    })
 }

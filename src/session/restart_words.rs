@@ -11,13 +11,22 @@ fn p(pa: f64, system: UnitSystem) -> String {
 }
 
 /// "13.1 bar (12.6 to 13.6)", or the value alone without a band.
-pub fn with_band(value: f64, band: Option<(f64, f64)>, dim: Dimension, system: UnitSystem) -> String {
+pub fn with_band(
+    value: f64,
+    band: Option<(f64, f64)>,
+    dim: Dimension,
+    system: UnitSystem,
+) -> String {
     let v = units::format(value, dim, system);
     match band {
         Some((lo, hi)) => {
             let strip = |x: f64| units::format(x, dim, system);
             let unit = format!(" {}", units::display_unit(dim, system));
-            format!("{v} ({} to {})", strip(lo).trim_end_matches(&unit), strip(hi).trim_end_matches(&unit))
+            format!(
+                "{v} ({} to {})",
+                strip(lo).trim_end_matches(&unit),
+                strip(hi).trim_end_matches(&unit)
+            )
         }
         None => v,
     }
@@ -35,8 +44,17 @@ fn limit_phrase(source: LimitSource) -> &'static str {
 
 /// "will not restart: needs 13.1 bar, the relief opens at 12.0 bar".
 pub fn headline(answer: &RestartAnswer, case: &RestartCase, system: UnitSystem) -> String {
-    let needs = with_band(case.check.pressure.total_pa, case.pressure_band_pa, Dimension::Pressure, system);
-    let limit = format!("{} {}", limit_phrase(answer.input.limit_source), p(case.check.available_pa, system));
+    let needs = with_band(
+        case.check.pressure.total_pa,
+        case.pressure_band_pa,
+        Dimension::Pressure,
+        system,
+    );
+    let limit = format!(
+        "{} {}",
+        limit_phrase(answer.input.limit_source),
+        p(case.check.available_pa, system)
+    );
     match case.check.outcome {
         Outcome::Restarts => format!("will restart: needs {needs}, {limit}"),
         Outcome::PumpTooWeak => format!("will not restart: needs {needs}, {limit}"),
@@ -98,22 +116,40 @@ pub fn caution(c: Caution) -> &'static str {
         Caution::NeverRaiseRelief => "never raise a relief setting to force a restart",
         Caution::WeakestPart => "never exceed the rated pressure of the weakest part of the line",
         Caution::IsolateBeforeOpening => "isolate and lock out the pump before opening the line",
-        Caution::BlockedInHeated => "a blocked-in line that is heated builds pressure: keep a path open when warming it",
+        Caution::BlockedInHeated => {
+            "a blocked-in line that is heated builds pressure: keep a path open when warming it"
+        }
         Caution::HotProduct => "the product may be hot: protect against spills when opening",
-        Caution::ColdRaisesGel => "cold raises the gel strength and the site gives no factor for it: the cold answer is optimistic",
-        Caution::AdvisesOnly => "this tool advises; it does not certify: local codes and licensed practice come first",
+        Caution::ColdRaisesGel => {
+            "cold raises the gel strength and the site gives no factor for it: the cold answer is optimistic"
+        }
+        Caution::AdvisesOnly => {
+            "this tool advises; it does not certify: local codes and licensed practice come first"
+        }
     }
 }
 
 /// One next step in words.
 pub fn next_step(s: NextStep) -> &'static str {
     match s {
-        NextStep::WarmTheLine => "warm the line (trace heating, a hot-water jacket) to soften the gel, with a path open",
-        NextStep::FlushBeforeLongStops => "flush or displace the line with a thin product before a long stop",
-        NextStep::RestartInSections => "restart in sections: open a drain or a spool to push a shorter plug",
-        NextStep::LowerStaticHead => "lower the static head or back-pressure: open the outlet, drain the riser",
-        NextStep::KeepStopsShort => "keep stops shorter than the longest safe stop, or keep the product moving slowly",
-        NextStep::TakeMoreReadings => "take more rested-gel readings (longer rests too) to narrow the answer",
+        NextStep::WarmTheLine => {
+            "warm the line (trace heating, a hot-water jacket) to soften the gel, with a path open"
+        }
+        NextStep::FlushBeforeLongStops => {
+            "flush or displace the line with a thin product before a long stop"
+        }
+        NextStep::RestartInSections => {
+            "restart in sections: open a drain or a spool to push a shorter plug"
+        }
+        NextStep::LowerStaticHead => {
+            "lower the static head or back-pressure: open the outlet, drain the riser"
+        }
+        NextStep::KeepStopsShort => {
+            "keep stops shorter than the longest safe stop, or keep the product moving slowly"
+        }
+        NextStep::TakeMoreReadings => {
+            "take more rested-gel readings (longer rests too) to narrow the answer"
+        }
     }
 }
 
@@ -125,16 +161,34 @@ pub fn lines(answer: &RestartAnswer, system: UnitSystem) -> Vec<String> {
     ];
     if let (Some(cold), Some(c)) = (&answer.cold, answer.input.cold) {
         let t = units::format(c.temperature_k, Dimension::Temperature, system);
-        out.push(format!("At {t} (coldest): {}", headline(answer, cold, system)));
+        out.push(format!(
+            "At {t} (coldest): {}",
+            headline(answer, cold, system)
+        ));
         out.push(format!("     {}", safe_stop(cold)));
     }
     out.push("Assumed:".into());
-    out.extend(answer.assumptions.iter().map(|a| format!("  - {}", assumption(a, system))));
+    out.extend(
+        answer
+            .assumptions
+            .iter()
+            .map(|a| format!("  - {}", assumption(a, system))),
+    );
     if !answer.next_steps.is_empty() {
         out.push("Next:".into());
-        out.extend(answer.next_steps.iter().map(|s| format!("  - {}", next_step(*s))));
+        out.extend(
+            answer
+                .next_steps
+                .iter()
+                .map(|s| format!("  - {}", next_step(*s))),
+        );
     }
     out.push("Cautions:".into());
-    out.extend(answer.cautions.iter().map(|c| format!("  - {}", caution(*c))));
+    out.extend(
+        answer
+            .cautions
+            .iter()
+            .map(|c| format!("  - {}", caution(*c))),
+    );
     out
 }

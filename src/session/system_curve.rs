@@ -47,8 +47,16 @@ pub fn regime(line: &Line, model: &Model, density: f64, flow_m3_s: f64) -> Regim
     let d = line.inner_diameter_m;
     let v = flow_m3_s / (std::f64::consts::PI * d * d / 4.0);
     let tau_w = wall_stress(d, model, flow_m3_s);
-    let re = if tau_w > 0.0 { 8.0 * density * v * v / tau_w } else { 0.0 };
-    if re > LAMINAR_LIMIT { Regime::NotLaminar } else { Regime::Laminar }
+    let re = if tau_w > 0.0 {
+        8.0 * density * v * v / tau_w
+    } else {
+        0.0
+    };
+    if re > LAMINAR_LIMIT {
+        Regime::NotLaminar
+    } else {
+        Regime::Laminar
+    }
 }
 
 /// Laminar flow for a wall stress: the general integral by Simpson's rule.
@@ -62,7 +70,13 @@ pub fn laminar_flow(diameter_m: f64, model: &Model, tau_w: f64) -> f64 {
     let f = |tau: f64| tau * tau * model.rate_at_stress(tau);
     let sum: f64 = (0..=INTERVALS)
         .map(|i| {
-            let w = if i == 0 || i == INTERVALS { 1.0 } else if i % 2 == 1 { 4.0 } else { 2.0 };
+            let w = if i == 0 || i == INTERVALS {
+                1.0
+            } else if i % 2 == 1 {
+                4.0
+            } else {
+                2.0
+            };
             w * f(tau0 + h * i as f64)
         })
         .sum();
@@ -82,7 +96,11 @@ pub fn wall_stress(diameter_m: f64, model: &Model, flow_m3_s: f64) -> f64 {
     let mut lo = tau0;
     for _ in 0..100 {
         let mid = 0.5 * (lo + hi);
-        if laminar_flow(diameter_m, model, mid) < flow_m3_s { lo = mid } else { hi = mid }
+        if laminar_flow(diameter_m, model, mid) < flow_m3_s {
+            lo = mid
+        } else {
+            hi = mid
+        }
         if hi - lo <= 1e-10 * hi {
             break;
         }
