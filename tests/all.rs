@@ -9,6 +9,7 @@ mod instrument;
 mod journal;
 mod journal_crash;
 mod report;
+mod restart;
 mod rheology;
 mod rheology_choice;
 mod rheology_errors;
