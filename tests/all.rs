@@ -5,9 +5,11 @@
 mod support;
 
 mod cli_fit;
+mod cli_restart;
 mod instrument;
 mod journal;
 mod journal_crash;
+mod pump;
 mod report;
 mod restart;
 mod rheology;

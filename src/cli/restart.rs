@@ -49,7 +49,7 @@ pub struct RestartArgs {
     #[arg(long)]
     pub design_pressure: Option<String>,
     /// How long the line has stood, e.g. "62 h", "1 h 30 min", "90 min".
-    #[arg(long, value_name = "DURATION")]
+    #[arg(long, value_name = "DURATION", allow_hyphen_values = true)]
     pub stopped_for: Option<String>,
     /// Margin kept below the usable pressure (0-1 or "10 %"; default 10 %).
     #[arg(long)]
