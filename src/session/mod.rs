@@ -13,6 +13,7 @@ pub mod restart;
 mod restart_notes;
 mod restart_site;
 pub mod restart_words;
+pub mod rheology_source;
 pub mod state;
 pub mod system_curve;
 pub mod temperature;
