@@ -267,6 +267,6 @@ fn site_pump_has_an_operating_point() {
     assert!(pd["operating_point"]["pressure_pa"].as_f64().is_some());
     refused(
         &["pump", "--pump", "P-1", "--product", "chilli-sauce"],
-        "give the product's flow curve",
+        "no nominal flow curve",
     );
 }

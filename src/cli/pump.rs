@@ -2,7 +2,7 @@
 //! its line with a product's flow curve.
 
 use super::args::Cli;
-use super::rheology_args::RheologyArgs;
+use super::rheology_args::RheologySourceArgs;
 use crate::pump::PumpPoint;
 use crate::session::pump::{self as sp, BepAnswer, SitePump};
 use crate::session::pump_words;
@@ -35,14 +35,12 @@ pub struct PumpArgs {
     /// Pump id from the site config (with --product and a flow curve).
     #[arg(long, value_name = "ID")]
     pub pump: Option<String>,
-    /// Product name from the site config.
-    #[arg(long)]
-    pub product: Option<String>,
     /// Shear rate for a non-Newtonian product's apparent viscosity (default 1000 1/s).
     #[arg(long)]
     pub shear_rate: Option<String>,
+    /// The product and its flow curve: flags, --journal, or the site's nominal constants.
     #[command(flatten)]
-    pub rheology: RheologyArgs,
+    pub source: RheologySourceArgs,
     /// One JSON object on stdout, SI units.
     #[arg(long)]
     pub json: bool,
@@ -171,15 +169,11 @@ pub(super) fn bep_text(a: &BepAnswer, system: UnitSystem) -> String {
 
 fn site(cli: &Cli, args: &PumpArgs) -> Result<ExitCode> {
     let site = super::trend::site_or_demo(cli)?;
-    let (Some(pump_id), Some(product)) = (&args.pump, &args.product) else {
+    let (Some(pump_id), Some(product)) = (&args.pump, &args.source.product) else {
         bail!("with --pump, also give --product NAME from the site config");
     };
-    let Some(model) = args.rheology.model()? else {
-        bail!(
-            "give the product's flow curve: --mu M | --k K --n N | --tau0 T --mu-p M | \
-             --tau0 T --k K --n N | --tau0 T --mu-c M"
-        );
-    };
+    let resolved = args.source.resolve(&site)?;
+    let model = resolved.model;
     let shear = q(
         "--shear-rate",
         args.shear_rate.as_deref(),
@@ -197,11 +191,11 @@ fn site(cli: &Cli, args: &PumpArgs) -> Result<ExitCode> {
     };
     let answer = sp::on_site(&query)?;
     if args.json {
-        println!(
-            "{}",
-            serde_json::to_string_pretty(&super::pump_output::json(&answer))?
-        );
+        let mut v = super::pump_output::json(&answer);
+        v["rheology"] = json!(resolved.describe());
+        println!("{}", serde_json::to_string_pretty(&v)?);
     } else {
+        println!("Flow curve: {}", resolved.describe());
         print!("{}", super::pump_output::text(&answer, site.unit_system));
     }
     Ok(ExitCode::SUCCESS)
