@@ -105,11 +105,15 @@ pub fn gel_line(gel: &GelFit, system: UnitSystem) -> String {
     let c = &gel.curve;
     let s = |pa| units::format(pa, Dimension::Stress, system);
     let ci = gel.ci95();
-    let band = |i: usize, f: &dyn Fn(f64) -> String| {
-        ci.map(|ci| format!(" ({} to {})", f(ci[i].0), f(ci[i].1)))
-            .unwrap_or_default()
+    // Stresses and the time constant cannot go below zero: the band is shown clamped there.
+    let stress = |i: usize, v: f64| {
+        let band = ci.map(|ci| (ci[i].0.max(0.0), ci[i].1));
+        restart_words::with_band(v, band, Dimension::Stress, system)
     };
     let dur = |x: f64| format_duration(x.max(0.0));
+    let tr_band = ci
+        .map(|ci| format!(" ({} to {})", dur(ci[2].0), dur(ci[2].1)))
+        .unwrap_or_default();
     let basis = match gel.basis {
         IntervalBasis::Scatter { dof } => {
             format!("; 95 % intervals from the readings' scatter ({dof} dof)")
@@ -126,12 +130,9 @@ pub fn gel_line(gel: &GelFit, system: UnitSystem) -> String {
         return format!("Gel stress: {} at any stop", s(c.initial_pa));
     }
     format!(
-        "Gel build-up: {}{} at the stop, {}{} after a long rest, time constant {}{}{basis}",
-        s(c.initial_pa),
-        band(0, &|x| s(x)),
-        s(c.long_rest_pa),
-        band(1, &|x| s(x)),
+        "Gel build-up: {} at the stop, {} after a long rest, time constant {}{tr_band}{basis}",
+        stress(0, c.initial_pa),
+        stress(1, c.long_rest_pa),
         dur(c.time_constant_s),
-        band(2, &dur),
     )
 }

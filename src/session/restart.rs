@@ -81,6 +81,7 @@ pub enum Assumption {
     TimeConstantFromSite { time_constant_s: f64 },
     ReadingErrorAssumed { relative_sd: f64 },
     StillBuilding { longest_rest_s: f64 },
+    BeyondLongestReading { longest_rest_s: f64 },
     GelGivenNoInterval,
     Margin { fraction: f64, default: bool },
     ColdGelFactor { factor: f64 },

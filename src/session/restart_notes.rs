@@ -13,6 +13,11 @@ pub(super) fn assumptions(input: &RestartInput) -> Vec<Assumption> {
         out.push(Assumption::LongRestNoStopGiven);
     }
     out.extend(gel_assumptions(input));
+    if let Some(longest) = beyond_readings(input) {
+        out.push(Assumption::BeyondLongestReading {
+            longest_rest_s: longest,
+        });
+    }
     out.push(Assumption::Margin {
         fraction: input.margin,
         default: input.margin_is_default,
@@ -31,6 +36,18 @@ pub(super) fn assumptions(input: &RestartInput) -> Vec<Assumption> {
         }
     }
     out
+}
+
+/// The longest rest read, when the stop judged (or a long rest) goes past it.
+fn beyond_readings(input: &RestartInput) -> Option<f64> {
+    let longest = input
+        .gel
+        .readings
+        .iter()
+        .map(|r| r.rest_s)
+        .fold(None, |m: Option<f64>, t| Some(m.map_or(t, |m| m.max(t))))?;
+    let judged = input.stopped_for_s.unwrap_or(f64::INFINITY);
+    (judged > longest).then_some(longest)
 }
 
 fn gel_assumptions(input: &RestartInput) -> Vec<Assumption> {

@@ -100,6 +100,7 @@ pub fn assumption(a: &Assumption, system: UnitSystem) -> String {
         Assumption::TimeConstantFromSite { time_constant_s } => format!("two readings cannot fit the time constant; the site's value of {} is used", format_duration(time_constant_s)),
         Assumption::ReadingErrorAssumed { relative_sd } => format!("three readings fit the three constants exactly; the band assumes each reading good to ±{:.0} % (one standard deviation)", relative_sd * 100.0),
         Assumption::StillBuilding { longest_rest_s } => format!("the gel was still building at the longest rest read ({}); the long-rest strength is an extrapolation", format_duration(longest_rest_s)),
+        Assumption::BeyondLongestReading { longest_rest_s } => format!("the readings reach only {} at rest; the answer for a longer stop is an extrapolation of the build-up curve (a reading after a rest as long as the stops you expect narrows it)", format_duration(longest_rest_s)),
         Assumption::GelGivenNoInterval => "the build-up constants carry no interval; the answer has no band".into(),
         Assumption::Margin { fraction, default } => format!("{:.0} % kept below the usable pressure{}", fraction * 100.0, if default { " (default, common practice)" } else { " (site setting)" }),
         Assumption::ColdGelFactor { factor } => format!("at the coldest the gel is {factor:.2} times as strong (the site's factor)"),
