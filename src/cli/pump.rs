@@ -125,9 +125,9 @@ pub fn run(cli: &Cli, args: &PumpArgs) -> Result<ExitCode> {
     };
     let answer = sp::at_bep(nu * 1e6, bep, rpm, rho);
     if args.json {
-        println!("{}", serde_json::to_string_pretty(&bep_json(&answer))?);
+        super::restart::emit(&(serde_json::to_string_pretty(&bep_json(&answer))? + "\n"))?;
     } else {
-        print!("{}", bep_text(&answer, UnitSystem::Si));
+        super::restart::emit(&bep_text(&answer, UnitSystem::Si))?;
     }
     Ok(ExitCode::SUCCESS)
 }
@@ -190,13 +190,14 @@ fn site(cli: &Cli, args: &PumpArgs) -> Result<ExitCode> {
         shear_rate_per_s: shear.unwrap_or(sp::DEFAULT_PUMP_SHEAR_RATE),
     };
     let answer = sp::on_site(&query)?;
-    if args.json {
+    let text = if args.json {
         let mut v = super::pump_output::json(&answer);
         v["rheology"] = json!(resolved.describe());
-        println!("{}", serde_json::to_string_pretty(&v)?);
+        serde_json::to_string_pretty(&v)? + "\n"
     } else {
-        println!("Flow curve: {}", resolved.describe());
-        print!("{}", super::pump_output::text(&answer, site.unit_system));
-    }
+        let body = super::pump_output::text(&answer, site.unit_system);
+        format!("Flow curve: {}\n{body}", resolved.describe())
+    };
+    super::restart::emit(&text)?;
     Ok(ExitCode::SUCCESS)
 }

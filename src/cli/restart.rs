@@ -79,15 +79,14 @@ pub fn run(cli: &Cli, args: &RestartArgs) -> Result<ExitCode> {
         None => (flag_input(args, stopped_for_s)?, UnitSystem::Si),
     };
     let answer = restart::analyse(input)?;
-    if args.json {
-        let value = restart_json::json(&answer, system);
-        println!("{}", serde_json::to_string_pretty(&value)?);
+    let text = if args.json {
+        serde_json::to_string_pretty(&restart_json::json(&answer, system))? + "\n"
     } else {
-        println!("{}", restart_json::gel_line(&answer.input.gel, system));
-        for line in restart_words::lines(&answer, system) {
-            println!("{line}");
-        }
-    }
+        let mut lines = vec![restart_json::gel_line(&answer.input.gel, system)];
+        lines.extend(restart_words::lines(&answer, system));
+        lines.join("\n") + "\n"
+    };
+    emit(&text)?;
     Ok(ExitCode::SUCCESS)
 }
 
@@ -208,4 +207,13 @@ fn site_input(
         input.margin_is_default = false;
     }
     Ok((input, site.unit_system))
+}
+
+/// Write to stdout; a reader that went away (`| head`) is not an error.
+pub(super) fn emit(text: &str) -> Result<()> {
+    use std::io::Write as _;
+    match std::io::stdout().lock().write_all(text.as_bytes()) {
+        Err(e) if e.kind() != std::io::ErrorKind::BrokenPipe => Err(e.into()),
+        _ => Ok(()),
+    }
 }

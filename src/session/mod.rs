@@ -8,6 +8,7 @@ pub mod duration;
 pub mod flow_curve;
 pub mod json;
 pub mod pump;
+mod pump_site;
 pub mod pump_words;
 pub mod restart;
 mod restart_notes;

@@ -13,6 +13,7 @@ mod band;
 mod error;
 mod gel;
 mod gel_fit;
+mod gel_lsq;
 mod pressure;
 mod safe_stop;
 
