@@ -38,7 +38,7 @@ fn restart_answer_with_band(bencher: divan::Bencher) {
         let input = restart::from_site(
             black_box(&site),
             ("L-2", "P-2", "filler-paste"),
-            GelSource::Readings(rows.clone()),
+            GelSource::Readings(rows.clone(), None),
             Some(62.0 * 3600.0),
         )
         .expect("demo input");

@@ -270,3 +270,75 @@ fn site_pump_has_an_operating_point() {
         "no nominal flow curve",
     );
 }
+
+// Derived: P-1 is centrifugal with a 32 m shut-off head on its water curve and an 8 bar casing
+// limit; on the sauce (1120 kg/m³) its shut-off pressure ρ·g·H = 1120·9.80665·32 = 351 470 Pa
+// is the lower, so it sets what is available. L-1's coldest is 8 °C with no gel factor: the
+// cold case keeps the gel and says that cold raises it.
+#[test]
+fn centrifugal_limit_is_its_shut_off_head_and_cold_is_cautioned() {
+    let v = json(&[
+        "restart",
+        "--line",
+        "L-1",
+        "--pump",
+        "P-1",
+        "--product",
+        "chilli-sauce",
+        "--gel-stress",
+        "30",
+    ]);
+    assert!(
+        rel(
+            v["available_pressure_pa"].as_f64().unwrap(),
+            1120.0 * 9.80665 * 32.0
+        ) < 1e-9
+    );
+    assert_eq!(v["limit_source"], "shut-off-head");
+    assert!(
+        v["cautions"]
+            .to_string()
+            .contains("cold raises the gel strength")
+    );
+    assert_eq!(v["coldest"]["gel_stress_pa"], v["gel_stress_pa"]);
+}
+
+// Source: the standard geometry's 0.511 Pa per dial degree (API RP 13B-1 convention, as the
+// instrument module holds it). Two readings with a time constant given: τi and τ∞ solve
+// exactly (derived in tests/restart.rs), and the answer says the time constant was given.
+#[test]
+fn dial_readings_and_two_readings() {
+    let file = csv("rest_time,dial\n10 s,10\n10 min,40\n30 min,60\n");
+    let path = file.path().to_str().unwrap().to_string();
+    let args = [
+        "restart",
+        "--diameter",
+        "0.1",
+        "--length",
+        "500",
+        "--available-pressure",
+        "20 bar",
+        "--gel-readings",
+        &path,
+    ];
+    let v = json(&args);
+    let readings = v["gel"]["readings"].as_array().unwrap();
+    assert!(rel(readings[1]["stress_pa"].as_f64().unwrap(), 40.0 * 0.511) < 1e-12);
+    let two = csv("rest_time,gel_stress\n10 s,100\n30 min,300\n");
+    let path = two.path().to_str().unwrap().to_string();
+    let mut args = vec![
+        "restart",
+        "--diameter",
+        "0.1",
+        "--length",
+        "500",
+        "--available-pressure",
+        "20 bar",
+    ];
+    args.extend(["--gel-readings", &path, "--gel-time-constant", "30 min"]);
+    let text = String::from_utf8(run(&args).success().get_output().stdout.clone()).unwrap();
+    assert!(
+        text.contains("two readings cannot fit the time constant; the value given (30 min"),
+        "{text}"
+    );
+}

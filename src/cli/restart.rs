@@ -115,7 +115,8 @@ fn gel_source(args: &RestartArgs) -> Result<Option<GelSource>> {
     Ok(Some(match (one, initial, last, tr, file) {
         (Some(s), None, None, None, None) => GelSource::Stress(s),
         (None, Some(a), Some(b), Some(t), None) => GelSource::Constants(a, b, t),
-        (None, None, None, None, Some(rows)) => GelSource::Readings(rows),
+        (None, None, None, None, Some(rows)) => GelSource::Readings(rows, None),
+        (None, None, None, Some(t), Some(rows)) => GelSource::Readings(rows, Some(t)),
         (None, None, None, None, None) => return Ok(None),
         _ => bail!(
             "give the gel one way: --gel-stress T | --gel-initial T --gel-final T \
@@ -177,7 +178,13 @@ fn flag_gel(source: GelSource) -> Result<GelFit> {
     Ok(match source {
         GelSource::Stress(s) => restart::gel_from_constants(s, s, 1.0)?,
         GelSource::Constants(a, b, t) => restart::gel_from_constants(a, b, t)?,
-        GelSource::Readings(rows) => fit_gel(&rows, &GelFitOptions::default())?,
+        GelSource::Readings(rows, tr) => {
+            let opts = GelFitOptions {
+                time_constant_s: tr,
+                ..GelFitOptions::default()
+            };
+            fit_gel(&rows, &opts)?
+        }
         GelSource::Product => bail!("a product's gel needs --site, --line, --pump and --product"),
     })
 }

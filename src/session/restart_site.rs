@@ -12,8 +12,9 @@ use crate::site::{Line, Product, Pump, PumpKind, Site};
 /// Where the gel build-up comes from.
 #[derive(Debug, Clone, PartialEq)]
 pub enum GelSource {
-    /// Rested-gel readings to fit.
-    Readings(Vec<GelReading>),
+    /// Rested-gel readings to fit, with a time constant to use if there are only two (else
+    /// the site product's, else the longer rest time).
+    Readings(Vec<GelReading>, Option<f64>),
     /// (τi, τ∞, tr) given directly.
     Constants(f64, f64, f64),
     /// One gel stress taken for any stop.
@@ -160,9 +161,9 @@ pub fn pump_limit(pump: &Pump, density: f64) -> (f64, LimitSource) {
 fn gel_fit(source: GelSource, product: &Product) -> Result<GelFit, RestartSetupError> {
     let site_tr = product.gel.map(|g| g.rebuild_time_s);
     Ok(match source {
-        GelSource::Readings(readings) => {
+        GelSource::Readings(readings, given_tr) => {
             let opts = GelFitOptions {
-                time_constant_s: site_tr,
+                time_constant_s: given_tr.or(site_tr),
                 ..GelFitOptions::default()
             };
             fit_gel(&readings, &opts)?

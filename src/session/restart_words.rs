@@ -97,7 +97,10 @@ pub fn assumption(a: &Assumption, system: UnitSystem) -> String {
         Assumption::SingleGelStress => "one gel stress is taken for any stop; the longest safe stop needs rested-gel readings or the build-up constants".into(),
         Assumption::GelLinearInStructure => "gel builds up at rest as τ(t) = τ∞ − (τ∞ − τi)·e^(−t/tr) (first-order rebuild, static yield stress taken as linear in the structure)".into(),
         Assumption::TimeConstantAssumed { time_constant_s } => format!("two readings cannot fit the time constant; it is assumed equal to the longer rest time, {}", format_duration(time_constant_s)),
-        Assumption::TimeConstantFromSite { time_constant_s } => format!("two readings cannot fit the time constant; the site's value of {} is used", format_duration(time_constant_s)),
+        Assumption::TimeConstantFromSite { time_constant_s } => format!(
+            "two readings cannot fit the time constant; the value given ({}, from the command line or the site's product) is used",
+            format_duration(time_constant_s)
+        ),
         Assumption::ReadingErrorAssumed { relative_sd } => format!("three readings fit the three constants exactly; the band assumes each reading good to ±{:.0} % (one standard deviation)", relative_sd * 100.0),
         Assumption::StillBuilding { longest_rest_s } => format!("the gel was still building at the longest rest read ({}); the long-rest strength is an extrapolation", format_duration(longest_rest_s)),
         Assumption::BeyondLongestReading { longest_rest_s } => format!("the readings reach only {} at rest; the answer for a longer stop is an extrapolation of the build-up curve (a reading after a rest as long as the stops you expect narrows it)", format_duration(longest_rest_s)),

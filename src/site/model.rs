@@ -34,7 +34,8 @@ pub struct Product {
 }
 
 /// Static yield stress rebuilding at rest, τy(t) = τ∞ − (τ∞ − τ0)·e^(−t/t_r)
-/// (first-order Moore-type kinetics, REFERENCE.md §4 [from memory]).
+/// (first-order structure kinetics at rest, Barnes 1997, *J. Non-Newt. Fluid Mech.* 70:1; the
+/// exponential in stress assumes the yield stress linear in the structure parameter).
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct GelBuildUp {
     /// τ0: static yield stress just after the product stops, Pa.
