@@ -274,3 +274,35 @@ proptest! {
         prop_assert!(stop(limit * (1.0 - cut)) <= stop(limit));
     }
 }
+
+// Derived: the chart's limit line is the gel stress at the usable pressure, (P − static −
+// back)·D/(4L); for the demo's paste line (12 bar, 49 028 Pa fixed, 62.7 mm, 38 m) that is
+// (12e5 − 49 028)·0.0627/152 = 474.77 Pa, and the allowed line (10 % margin) 425.28 Pa.
+#[test]
+fn chart_data_for_a_restart_view() {
+    use rheoside::session::restart::{self, GelSource};
+    let site = rheoside::site::demo().unwrap();
+    let input = restart::from_site(
+        &site,
+        ("L-2", "P-2", "filler-paste"),
+        GelSource::Product,
+        None,
+    )
+    .unwrap();
+    let answer = restart::analyse(input).unwrap();
+    let chart = rheoside::session::restart_chart::chart(&answer, false, 0.0, 50).unwrap();
+    assert_eq!(chart.points.len(), 50);
+    let static_pa = 1480.0 * 9.80665 * 2.0;
+    let limit = (12e5 - static_pa - 20_000.0) * 0.0627 / (4.0 * 38.0);
+    assert!(rel(chart.limit_gel_pa, limit) < 1e-9 && rel(limit, 474.77) < 1e-4);
+    assert!(rel(chart.allowed_gel_pa, 425.28) < 1e-4);
+    assert!(
+        chart
+            .points
+            .windows(2)
+            .all(|w| w[1].stress_pa >= w[0].stress_pa)
+    );
+    let cold = rheoside::session::restart_chart::chart(&answer, true, 0.0, 10).unwrap();
+    // The demo's cold factor 1.3 scales the gel: at rest 0 it is 1.3 × 120 Pa.
+    assert!(rel(cold.points[0].stress_pa, 156.0) < 1e-12);
+}

@@ -11,6 +11,7 @@ pub mod pump;
 mod pump_site;
 pub mod pump_words;
 pub mod restart;
+pub mod restart_chart;
 mod restart_notes;
 mod restart_site;
 pub mod restart_words;
