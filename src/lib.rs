@@ -29,3 +29,7 @@ pub mod tui;
 pub mod text;
 
 pub mod readings;
+
+pub mod line;
+
+pub mod pump;

@@ -6,6 +6,7 @@ mod support;
 
 mod cli_fit;
 mod cli_mix;
+mod cli_restart;
 mod hub;
 mod instrument;
 mod journal;
@@ -14,7 +15,9 @@ mod layering;
 mod mixing;
 mod mixing_props;
 mod mixing_refs;
+mod pump;
 mod report;
+mod restart;
 mod rheology;
 mod rheology_choice;
 mod rheology_errors;

@@ -42,6 +42,14 @@ const CASES: &[(&str, &[&str])] = &[
         ],
     ),
     (
+        "restart-settings.toml",
+        &[
+            "13:19: field 'line.gel_cold_factor': '0.5' — must be between 1 and 100",
+            "14:17: field 'line.back_pressure': '-1 bar' — must not be negative; give a \
+           pressure, e.g. '6 bar'",
+        ],
+    ),
+    (
         "out-of-range.toml",
         &[
             "9:18: field 'line.inner_diameter': '-50 mm' — must be greater than zero; \

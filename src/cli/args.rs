@@ -45,6 +45,10 @@ pub enum Command {
     Trend(TrendArgs),
     /// Power, torque and caverns for an agitated tank; viscosity from a motor reading.
     Mix(Box<super::mix::args::MixArgs>),
+    /// Will a line restart after a stop, and the longest safe stop (gel build-up at rest).
+    Restart(super::restart::RestartArgs),
+    /// A pump on a viscous product: ANSI/HI 9.6.7 correction, duty point, PD slip and relief.
+    Pump(super::pump::PumpArgs),
 }
 
 impl Command {
@@ -57,6 +61,8 @@ impl Command {
             Command::Report(_) => "report",
             Command::Trend(_) => "trend",
             Command::Mix(_) => "mix",
+            Command::Restart(_) => "restart",
+            Command::Pump(_) => "pump",
         }
     }
 }

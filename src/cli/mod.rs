@@ -7,9 +7,14 @@ mod check_site;
 mod fit;
 mod fit_csv;
 mod fit_output;
+mod gel_csv;
 mod mix;
+mod pump;
+mod pump_output;
 mod record;
 mod report;
+mod restart;
+mod restart_json;
 pub mod rheology_args;
 mod trend;
 
@@ -31,6 +36,8 @@ pub fn run(cli: &Cli, command: &Command) -> anyhow::Result<ExitCode> {
         Command::Report(a) => report::run(cli, a),
         Command::Trend(a) => trend::run(cli, a),
         Command::Mix(a) => mix::run(cli, a),
+        Command::Restart(a) => restart::run(cli, a),
+        Command::Pump(a) => pump::run(cli, a),
     }
 }
 

@@ -4,9 +4,19 @@
 //! `rheoside fit` and a number drawn on screen come from the same code path. Later
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
+pub mod duration;
 pub mod flow_curve;
+pub mod pump;
+mod pump_site;
+pub mod pump_words;
+pub mod restart;
+pub mod restart_chart;
+mod restart_notes;
+mod restart_site;
+pub mod restart_words;
 pub mod rheology_source;
 pub mod state;
+pub mod system_curve;
 pub mod tank;
 pub mod tank_input;
 pub mod tank_json;

@@ -15,7 +15,16 @@ pub(crate) const LINE_KEYS: &[&str] = &[
     "elevation_change",
     "fittings_length",
     "design_pressure",
+    "back_pressure",
+    "restart_margin",
+    "coldest_temperature",
+    "gel_cold_factor",
 ];
+
+/// Restart margin when the line gives none (common practice, no source).
+pub const DEFAULT_RESTART_MARGIN: f64 = 0.10;
+/// Largest gel cold factor accepted: beyond this the product is another material.
+const MAX_GEL_COLD_FACTOR: f64 = 100.0;
 
 /// Largest relative roughness ε/D accepted; the friction-factor charts stop at 0.05.
 const MAX_RELATIVE_ROUGHNESS: f64 = 0.05;
@@ -55,6 +64,7 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Line> {
         }
         ok
     });
+    let restart = restart_settings(&t, sink);
     Some(Line {
         id: id?,
         description,
@@ -64,5 +74,53 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Line> {
         elevation_change_m: elevation.unwrap_or(0.0),
         fittings_length_m: fittings.unwrap_or(0.0),
         design_pressure_pa: design?,
+        back_pressure_pa: restart.back_pressure_pa,
+        restart_margin: restart.margin,
+        coldest_temperature_k: restart.coldest_k,
+        gel_cold_factor: restart.cold_factor,
     })
+}
+
+/// The restart settings, each optional; a bad one is reported and left at its default.
+struct RestartSettings {
+    back_pressure_pa: f64,
+    margin: f64,
+    coldest_k: Option<f64>,
+    cold_factor: Option<f64>,
+}
+
+fn restart_settings(t: &RawTable, sink: &mut Sink) -> RestartSettings {
+    let back = t.quantity(
+        sink,
+        "back_pressure",
+        Dimension::Pressure,
+        Rule::NonNegative,
+        Need::Optional,
+    );
+    let margin = t.quantity(
+        sink,
+        "restart_margin",
+        Dimension::Fraction,
+        Rule::Within(0.0, 0.9),
+        Need::Optional,
+    );
+    let coldest = t.quantity(
+        sink,
+        "coldest_temperature",
+        Dimension::Temperature,
+        Rule::Positive,
+        Need::Optional,
+    );
+    let factor = t.number(
+        sink,
+        "gel_cold_factor",
+        Rule::Within(1.0, MAX_GEL_COLD_FACTOR),
+        Need::Optional,
+    );
+    RestartSettings {
+        back_pressure_pa: back.unwrap_or(0.0),
+        margin: margin.unwrap_or(DEFAULT_RESTART_MARGIN),
+        coldest_k: coldest,
+        cold_factor: factor,
+    }
 }

@@ -97,6 +97,16 @@ pub struct Line {
     pub fittings_length_m: f64,
     /// Maximum allowable working pressure of the weakest part, gauge, Pa.
     pub design_pressure_pa: f64,
+    /// Pressure held at the outlet (a filler head, a pressurised tank), gauge, Pa.
+    pub back_pressure_pa: f64,
+    /// Fraction kept below the usable pressure when judging a restart (default 10 %,
+    /// common practice, no source).
+    pub restart_margin: f64,
+    /// The coldest the line is expected to get (a winter night, a stop outdoors), K.
+    pub coldest_temperature_k: Option<f64>,
+    /// Gel (static yield) stress at the coldest temperature over that at the product's
+    /// reference temperature (empirical, from site tests; ≥ 1).
+    pub gel_cold_factor: Option<f64>,
 }
 
 impl Line {
@@ -139,6 +149,10 @@ pub struct Pump {
     pub rated_speed_rad_s: f64,
     pub max_discharge_pressure_pa: Option<f64>,
     pub relief_setting_pa: Option<f64>,
+    /// Measured delivered over displaced volume (positive displacement), 0–1.
+    pub volumetric_efficiency: Option<f64>,
+    /// Motor nameplate rating, W.
+    pub motor_rating_w: Option<f64>,
 }
 
 impl Pump {

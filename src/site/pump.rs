@@ -17,6 +17,8 @@ pub(crate) const PUMP_KEYS: &[&str] = &[
     "relief_setting",
     "displacement",
     "curve",
+    "volumetric_efficiency",
+    "motor_rating",
 ];
 const POINT_KEYS: &[&str] = &["flow", "head", "efficiency"];
 
@@ -46,6 +48,7 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Pump> {
         Need::Required,
     );
     let (max_discharge, relief) = pressure_limits(&t, sink);
+    let (volumetric, motor) = extras(&t, kind, sink);
     let kind = match kind? {
         Kind::Centrifugal => centrifugal(&t, sink),
         Kind::Displacement => displacement(&t, sink),
@@ -58,7 +61,32 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Pump> {
         rated_speed_rad_s: speed?,
         max_discharge_pressure_pa: max_discharge,
         relief_setting_pa: relief,
+        volumetric_efficiency: volumetric,
+        motor_rating_w: motor,
     })
+}
+
+/// Volumetric efficiency (positive displacement only) and motor rating, both optional.
+fn extras(t: &RawTable, kind: Option<Kind>, sink: &mut Sink) -> (Option<f64>, Option<f64>) {
+    let volumetric = t.quantity(
+        sink,
+        "volumetric_efficiency",
+        Dimension::Fraction,
+        Rule::UnitInterval,
+        Need::Optional,
+    );
+    if kind == Some(Kind::Centrifugal) && t.has("volumetric_efficiency") {
+        let msg = "used only with kind 'positive-displacement'; remove it".into();
+        t.fail(sink, "volumetric_efficiency", ErrorKind::BadValue, msg);
+    }
+    let motor = t.quantity(
+        sink,
+        "motor_rating",
+        Dimension::Power,
+        Rule::Positive,
+        Need::Optional,
+    );
+    (volumetric, motor)
 }
 
 /// At least one of the casing/discharge limit and the relief setting (gauge) must be known.

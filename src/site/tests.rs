@@ -60,10 +60,10 @@ fn demo_loads_with_values_in_si() {
         "relief below the 14 bar casing limit"
     );
     let paste = site.product("filler-paste").expect("paste");
-    // 20 °C = 293.15 K; 25 min = 1500 s.
+    // 20 °C = 293.15 K; 2 h = 7200 s.
     assert!(close(paste.reference_temperature_k, 293.15));
     let gel = paste.gel.expect("gels at rest");
-    assert!(close(gel.rebuild_time_s, 1500.0));
+    assert!(close(gel.rebuild_time_s, 7200.0));
     assert!(gel.long_rest_pa > gel.initial_pa);
 }
 
@@ -126,6 +126,54 @@ fn line_cross_field_checks() {
         &LINE.replace("\"20 m\"", "\"20\""),
         "a bare number is ambiguous",
     );
+}
+
+#[test]
+fn restart_settings_on_a_line() {
+    // Defaults: no back-pressure, a 10 % margin (common practice, no source), no cold case.
+    let site = load_str(&format!("{HEAD}{LINE}"), "t.toml").expect("plain line loads");
+    let l = site.line("L-1").expect("L-1");
+    assert_eq!(l.back_pressure_pa, 0.0);
+    assert!(close(l.restart_margin, 0.10));
+    assert_eq!((l.coldest_temperature_k, l.gel_cold_factor), (None, None));
+    let set = format!(
+        "{LINE}back_pressure = \"0.5 bar\"\nrestart_margin = \"15 %\"\n\
+         coldest_temperature = \"-5 C\"\ngel_cold_factor = 1.5\n"
+    );
+    let site = load_str(&format!("{HEAD}{set}"), "t.toml").expect("restart settings load");
+    let l = site.line("L-1").expect("L-1");
+    // bar = 1e5 Pa (NIST SP 811); −5 °C = 268.15 K; "15 %" = 0.15.
+    assert!(close(l.back_pressure_pa, 0.5e5));
+    assert!(close(l.restart_margin, 0.15));
+    assert!(close(l.coldest_temperature_k.unwrap_or(0.0), 268.15));
+    assert_eq!(l.gel_cold_factor, Some(1.5));
+    one_error_containing(&format!("{LINE}gel_cold_factor = 0.5\n"), "gel_cold_factor");
+    one_error_containing(&format!("{LINE}restart_margin = 0.95\n"), "restart_margin");
+    one_error_containing(
+        &format!("{LINE}back_pressure = \"-1 bar\"\n"),
+        "back_pressure",
+    );
+}
+
+#[test]
+fn pump_motor_and_volumetric_efficiency() {
+    let pd = "[[pump]]\nid = \"P\"\nkind = \"positive-displacement\"\nfeeds = \"L-1\"\n\
+              rated_speed = \"300 rpm\"\nrelief_setting = \"6 bar\"\ndisplacement = \"1 L/rev\"\n";
+    let ok = format!("{HEAD}{LINE}{pd}volumetric_efficiency = \"90 %\"\nmotor_rating = \"4 kW\"\n");
+    let site = load_str(&ok, "t.toml").expect("loads");
+    let p = site.pump("P").expect("P");
+    assert_eq!(p.volumetric_efficiency, Some(0.9));
+    assert!(close(p.motor_rating_w.unwrap_or(0.0), 4000.0));
+    one_error_containing(
+        &format!("{LINE}{pd}volumetric_efficiency = 1.2\n"),
+        "volumetric_efficiency",
+    );
+    let centrifugal = format!(
+        "{LINE}{PUMP}volumetric_efficiency = 0.9\ncurve = [{{ flow = \"0 m3/h\", head = \"30 m\", \
+         efficiency = 0 }}, {{ flow = \"5 m3/h\", head = \"28 m\", efficiency = 0.5 }}, \
+         {{ flow = \"9 m3/h\", head = \"25 m\", efficiency = 0.6 }}]\n"
+    );
+    one_error_containing(&centrifugal, "used only with kind 'positive-displacement'");
 }
 
 #[test]

@@ -1,0 +1,2 @@
+//! Pipelines: pressure drop in every regime (elsewhere) and restart after a stop (`restart`).
+pub mod restart;
