@@ -30,16 +30,7 @@ pub fn read(path: &Path) -> Result<CsvData> {
 }
 
 pub fn parse(text: &str) -> Result<CsvData> {
-    let mut reader = csv::ReaderBuilder::new()
-        .trim(csv::Trim::All)
-        .comment(Some(b'#'))
-        .from_reader(text.as_bytes());
-    let headers: Vec<String> = reader
-        .headers()
-        .context("the first line must be a header")?
-        .iter()
-        .map(|h| h.to_ascii_lowercase())
-        .collect();
+    let (mut reader, headers) = super::fit_csv::reader_with_headers(text)?;
     let layout = Layout::from_headers(&headers)?;
     let mut first = Vec::new();
     let mut second = Vec::new();
@@ -144,6 +135,22 @@ fn temperature(record: &csv::StringRecord, col: usize, line: usize) -> Result<f6
     let raw = record.get(col).unwrap_or("");
     units::parse(raw, Dimension::Temperature)
         .map_err(|e| anyhow::anyhow!("line {line}, column 'temperature': {e}"))
+}
+
+/// A CSV reader over `text` (cells trimmed, `#` lines skipped) and its header names in
+/// lower case; shared by every CSV the command line reads.
+pub(super) fn reader_with_headers(text: &str) -> Result<(csv::Reader<&[u8]>, Vec<String>)> {
+    let mut reader = csv::ReaderBuilder::new()
+        .trim(csv::Trim::All)
+        .comment(Some(b'#'))
+        .from_reader(text.as_bytes());
+    let headers: Vec<String> = reader
+        .headers()
+        .context("the first line must be a header")?
+        .iter()
+        .map(|h| h.to_ascii_lowercase())
+        .collect();
+    Ok((reader, headers))
 }
 
 #[cfg(test)]

@@ -26,16 +26,7 @@ pub fn read(path: &Path) -> Result<Vec<GelReading>> {
 }
 
 pub fn parse(text: &str) -> Result<Vec<GelReading>> {
-    let mut reader = csv::ReaderBuilder::new()
-        .trim(csv::Trim::All)
-        .comment(Some(b'#'))
-        .from_reader(text.as_bytes());
-    let headers: Vec<String> = reader
-        .headers()
-        .context("the first line must be a header")?
-        .iter()
-        .map(|h| h.to_ascii_lowercase())
-        .collect();
+    let (mut reader, headers) = super::fit_csv::reader_with_headers(text)?;
     let column = match headers
         .iter()
         .map(String::as_str)
