@@ -6,9 +6,54 @@
 //! ("1200 cP", "12 lbf/100ft2"). Any other mix is refused with what is accepted.
 
 use crate::rheology::Model;
+use crate::session::rheology_source::{self, Resolved, SourceRequest};
+use crate::site::Site;
 use crate::units::{self, Dimension};
 use anyhow::{Result, bail};
 use clap::Args;
+use std::path::PathBuf;
+
+/// Where the flow curve comes from: the flags above, a journal's latest fitted set for the
+/// product, or the product's nominal constants in the site config; and the temperature the
+/// answer is for (the curve is shifted there by the product's activation energy).
+#[derive(Debug, Clone, Default, Args)]
+pub struct RheologySourceArgs {
+    #[command(flatten)]
+    pub rheology: RheologyArgs,
+    /// Product name from the site config (its density, activation energy, nominal curve).
+    #[arg(long, value_name = "NAME")]
+    pub product: Option<String>,
+    /// Take the product's latest fitted viscometer set from this session journal.
+    #[arg(long, value_name = "FILE")]
+    pub journal: Option<PathBuf>,
+    /// Temperature the answer is for (bare number: °C; or e.g. "318 K", "140 F").
+    #[arg(long, value_name = "T")]
+    pub temperature: Option<String>,
+}
+
+impl RheologySourceArgs {
+    /// The request for the session resolver, with every flag checked.
+    pub fn request(&self) -> Result<SourceRequest> {
+        let temperature_k = match self.temperature.as_deref() {
+            None => None,
+            Some(text) => match units::parse_positive(text, Dimension::Temperature) {
+                Ok(t) => Some(t),
+                Err(e) => bail!("--temperature: {e}"),
+            },
+        };
+        Ok(SourceRequest {
+            flags: self.rheology.model()?,
+            product: self.product.clone(),
+            journal: self.journal.clone(),
+            temperature_k,
+        })
+    }
+
+    /// The flow curve these flags name, at the requested temperature.
+    pub fn resolve(&self, site: &Site) -> Result<Resolved> {
+        Ok(rheology_source::resolve(site, &self.request()?)?)
+    }
+}
 
 /// Flow-curve constants typed as flags. Empty when the rheology comes from elsewhere (a site
 /// product's nominal constants or a journal's latest fit).
