@@ -15,6 +15,8 @@ pub mod site;
 
 pub mod journal;
 
+pub mod line;
+
 pub mod session;
 
 pub mod cli;

@@ -8,6 +8,7 @@ mod cli_fit;
 mod instrument;
 mod journal;
 mod journal_crash;
+mod line;
 mod report;
 mod rheology;
 mod rheology_choice;
