@@ -9,6 +9,7 @@ mod instrument;
 mod journal;
 mod journal_crash;
 mod line;
+mod line_source;
 mod report;
 mod rheology;
 mod rheology_choice;

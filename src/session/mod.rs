@@ -6,6 +6,7 @@
 
 pub mod flow_curve;
 pub mod json;
+pub mod rheology_shift;
 pub mod rheology_source;
 pub mod state;
 pub mod temperature;

@@ -11,6 +11,7 @@ mod errors;
 mod fields;
 mod line;
 mod model;
+mod nominal;
 mod product;
 mod pump;
 mod raw;
@@ -24,8 +25,8 @@ mod viscometer;
 
 pub use errors::{ErrorKind, SiteError, SiteErrors};
 pub use model::{
-    Baffles, CurvePoint, EquipmentKind, GelBuildUp, Impeller, LimitProperty, Line, Product, Pump,
-    PumpKind, Site, SpecLimit, Tank, Viscometer,
+    Baffles, CurvePoint, EquipmentKind, GelBuildUp, Impeller, LimitProperty, Line, NominalCurve,
+    Product, Pump, PumpKind, Site, SpecLimit, Tank, Viscometer,
 };
 pub use pump::MIN_CURVE_POINTS;
 pub use summary::summary;
