@@ -43,6 +43,8 @@ pub enum Command {
     Report(ReportArgs),
     /// A product's fitted constants over past sessions, against its spec limits.
     Trend(TrendArgs),
+    /// Pressure drop in a line for a flow, or the flow for a pressure drop.
+    Line(Box<super::line_args::LineArgs>),
 }
 
 #[derive(Debug, Args)]

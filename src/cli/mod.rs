@@ -6,6 +6,9 @@ mod check_site;
 mod fit;
 mod fit_csv;
 mod fit_output;
+mod line;
+pub mod line_args;
+mod line_print;
 mod record;
 mod report;
 pub mod rheology_args;
@@ -29,6 +32,7 @@ pub fn main() -> ExitCode {
         Some(Command::Record(a)) => record::run(&cli, a),
         Some(Command::Report(a)) => report::run(&cli, a),
         Some(Command::Trend(a)) => trend::run(&cli, a),
+        Some(Command::Line(a)) => line::run(&cli, a),
     };
     match outcome {
         Ok(code) => code,
