@@ -49,7 +49,8 @@ pub enum Command {
 
 #[derive(Debug, Args)]
 pub struct FitArgs {
-    /// CSV with header `rpm,dial` or `shear_rate,shear_stress` (SI), optional `temperature`.
+    /// CSV with header `rpm,dial` or `shear_rate,shear_stress` (SI), optional `temperature`;
+    /// or plant readings `flow,pressure_drop` with --diameter/--length or --line.
     pub file: PathBuf,
     /// Viscometer geometry when the CSV holds rpm and dial readings.
     #[arg(long, value_name = "NAME")]
@@ -69,6 +70,8 @@ pub struct FitArgs {
     /// One JSON object on stdout, SI units.
     #[arg(long)]
     pub json: bool,
+    #[command(flatten)]
+    pub pipe: super::fit_pipe::PipeFitArgs,
 }
 
 #[derive(Debug, Args)]

@@ -6,6 +6,8 @@ mod check_site;
 mod fit;
 mod fit_csv;
 mod fit_output;
+mod fit_pipe;
+mod fit_pipe_output;
 mod line;
 pub mod line_args;
 mod line_print;

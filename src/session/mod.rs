@@ -7,6 +7,7 @@
 pub mod flow_curve;
 pub mod json;
 pub mod line;
+pub mod line_plant;
 pub mod line_words;
 pub mod rheology_shift;
 pub mod rheology_source;
