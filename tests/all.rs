@@ -9,6 +9,8 @@ mod instrument;
 mod journal;
 mod journal_crash;
 mod line;
+mod line_cli;
+mod line_props;
 mod line_source;
 mod report;
 mod rheology;

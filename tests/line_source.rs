@@ -111,7 +111,7 @@ fn refusals_say_what_is_accepted() {
 
 /// A journal with one chilli-sauce set at 30 °C on the standard viscometer
 /// (dial = 6.966·rpm^0.4, a power-law-like sauce; invented readings).
-fn sauce_journal(dir: &Path) -> PathBuf {
+pub(crate) fn sauce_journal(dir: &Path) -> PathBuf {
     let new = NewSession {
         log_dir: dir.to_path_buf(),
         site_id: "marrowdale-u4".into(),

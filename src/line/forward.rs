@@ -9,6 +9,7 @@ use super::friction::{
 use super::laminar::wall_stress_at_flow;
 use super::pipe::{Fluid, Pipe, positive};
 use super::regime::{Regime, critical_reynolds, turbulent_onset};
+use super::turbulent::{AtWall, DM_N_FLOOR, dodge_metzner_at_wall};
 use crate::rheology::Model;
 
 /// Dodge & Metzner's data: flow index range, and the highest Re_MR (about 3.6×10⁴, from memory).
@@ -27,6 +28,7 @@ pub fn pressure_drop(pipe: &Pipe, fluid: &Fluid, flow_m3_s: f64) -> Result<LineA
 struct LaminarState {
     tau_w: f64,
     nominal: f64,
+    wall_rate: f64,
     n_prime: f64,
     reynolds: f64,
 }
@@ -44,6 +46,7 @@ fn laminar_state(pipe: &Pipe, fluid: &Fluid, v: f64, q: f64) -> LaminarState {
     LaminarState {
         tau_w,
         nominal,
+        wall_rate,
         n_prime,
         reynolds: 8.0 * fluid.density_kg_m3 * v * v / tau_w,
     }
@@ -56,7 +59,13 @@ pub(crate) fn evaluate(pipe: &Pipe, fluid: &Fluid, q: f64) -> LineAnswer {
     let d = pipe.inner_diameter_m;
     let dyn_p = 0.5 * fluid.density_kg_m3 * v * v;
     let f_lam = lam.tau_w / dyn_p;
-    let (re_c, rule) = critical_reynolds(&fluid.model, fluid.density_kg_m3, d, lam.n_prime);
+    let (re_c, rule) = critical_reynolds(
+        &fluid.model,
+        fluid.density_kg_m3,
+        d,
+        lam.n_prime,
+        lam.wall_rate,
+    );
     let regime = classify(lam.reynolds, re_c);
     let mut notes = Vec::new();
     let turb =
@@ -139,19 +148,34 @@ fn turbulent(
                 Correlation::DarbyMunBoger,
             )
         }
-        _ => {
-            notes.push(Note::SmoothPipeAssumed);
-            let n = lam.n_prime;
-            if !(DM_N_RANGE.0..=DM_N_RANGE.1).contains(&n) {
-                notes.push(Note::FlowIndexOutsideData { n_prime: n });
-            }
-            if lam.reynolds > DM_RE_MAX {
-                notes.push(Note::ReynoldsBeyondData {
-                    reynolds: lam.reynolds,
-                    limit: DM_RE_MAX,
-                });
-            }
-            (dodge_metzner(lam.reynolds, n), Correlation::DodgeMetzner)
+        Model::PowerLaw { n, .. } => {
+            let at = AtWall {
+                f: dodge_metzner(lam.reynolds, n.max(DM_N_FLOOR)),
+                n_prime: n,
+                reynolds: lam.reynolds,
+            };
+            (dm_notes(at, notes), Correlation::DodgeMetzner)
+        }
+        Model::HerschelBulkley { .. } | Model::Casson { .. } => {
+            let at = dodge_metzner_at_wall(pipe, fluid, v, lam.tau_w);
+            (dm_notes(at, notes), Correlation::DodgeMetzner)
         }
     }
+}
+
+/// The Dodge–Metzner friction factor, with the notes on where it was used.
+fn dm_notes(at: AtWall, notes: &mut Vec<Note>) -> f64 {
+    notes.push(Note::SmoothPipeAssumed);
+    if !(DM_N_RANGE.0..=DM_N_RANGE.1).contains(&at.n_prime) {
+        notes.push(Note::FlowIndexOutsideData {
+            n_prime: at.n_prime,
+        });
+    }
+    if at.reynolds > DM_RE_MAX {
+        notes.push(Note::ReynoldsBeyondData {
+            reynolds: at.reynolds,
+            limit: DM_RE_MAX,
+        });
+    }
+    at.f
 }

@@ -2,7 +2,7 @@
 //! rough pipe, Dodge–Metzner for a power-law-like product in a smooth pipe, and Darby, Mun &
 //! Boger for a Bingham plastic.
 
-/// Fixed-point iterations for the implicit friction laws (each converges in under 20).
+/// Fixed-point iterations for Colebrook (it converges in under 20).
 const ITERATIONS: usize = 100;
 
 /// Colebrook (1939, J. Inst. Civ. Eng. 11:133), Darcy form
@@ -29,15 +29,18 @@ pub fn colebrook_fanning(reynolds: f64, relative_roughness: f64) -> f64 {
 pub fn dodge_metzner(reynolds: f64, n_prime: f64) -> f64 {
     let a = 4.0 / n_prime.powf(0.75);
     let b = 0.4 / n_prime.powf(1.2);
-    let mut x: f64 = 10.0; // 1/√f, so f^(1−n′/2) = x^(n′−2)
-    for _ in 0..ITERATIONS {
-        let next = (a * (reynolds * x.powf(n_prime - 2.0)).log10() - b).max(1e-3);
-        if (next - x).abs() <= 1e-14 * x.abs() {
-            x = next;
-            break;
-        }
-        x = next;
-    }
+    // In x = 1/√f the equation is g(x) = x − a·log10(Re·x^(n′−2)) + b = 0, with f^(1−n′/2) =
+    // x^(n′−2). g rises with x (g′ = 1 + a(2−n′)/(x ln 10) > 0), so bisection finds the one
+    // root; a plain fixed-point iteration oscillates at small n′.
+    let g = |x: f64| x - a * (reynolds * x.powf(n_prime - 2.0)).log10() + b;
+    let (lo, hi) = (1e-3, 1e4);
+    let x = if g(lo) >= 0.0 {
+        lo
+    } else if g(hi) <= 0.0 {
+        hi
+    } else {
+        super::solve::bisect(lo, hi, g)
+    };
     1.0 / (x * x)
 }
 

@@ -21,6 +21,7 @@ mod laminar;
 mod pipe;
 mod regime;
 mod solve;
+mod turbulent;
 
 pub use answer::{Correlation, LineAnswer, Note};
 pub use backcalc::{BackCalc, PlantPair, PlantPoint, SinglePair, back_calculate, single_pair};

@@ -36,11 +36,20 @@ pub enum CriticalRule {
     /// Hanks (1963, AIChE J 9:306; page from memory) for a Bingham plastic with Hedstrom number He; φc is the
     /// plug fraction τ0/τw at transition.
     Hanks { hedstrom: f64, phi_c: f64 },
-    /// Our choice for Herschel–Bulkley and Casson: Ryan–Johnson at the local flow index n′ of
-    /// the laminar pipe flow curve at this flow (the Metzner–Reed view of the product as a
-    /// power law with index n′ at each wall stress). No single published criterion covers both
-    /// models; this one reduces to Ryan–Johnson at τ0 = 0 and to 2100 at n′ = 1.
-    RyanJohnsonLocal { n_prime: f64 },
+    /// Our choice for Herschel–Bulkley and Casson, where no single published criterion
+    /// covers both: the larger of Ryan–Johnson at the local flow index n′ of the laminar pipe
+    /// flow curve (the Metzner–Reed view of the product as a local power law) and Hanks'
+    /// criterion for the Bingham plastic tangent to the flow curve at the wall (its Hedstrom
+    /// number from τ0 and the slope dτ/dγ̇ at the wall rate). Near the yield stress n′ falls
+    /// towards zero and Ryan–Johnson alone would call a plug flow turbulent; far above it the
+    /// tangent viscosity is small and Ryan–Johnson governs. It is Hanks' rule for a
+    /// Herschel–Bulkley product with n = 1 (a Bingham plastic) and Ryan–Johnson at τ0 = 0.
+    YieldStressLocal {
+        n_prime: f64,
+        tangent_hedstrom: f64,
+        ryan_johnson: f64,
+        hanks: f64,
+    },
 }
 
 /// Ryan–Johnson critical Reynolds number, Re_c = 6464n(2+n)^((2+n)/(1+n))/(1+3n)²
@@ -71,30 +80,63 @@ pub fn critical_reynolds(
     density: f64,
     diameter: f64,
     n_prime: f64,
+    wall_rate: f64,
 ) -> (f64, CriticalRule) {
     match *model {
         Model::Newtonian { .. } => (2100.0, CriticalRule::Newtonian),
         Model::PowerLaw { n, .. } => (ryan_johnson(n), CriticalRule::RyanJohnson { n }),
         Model::Bingham { tau0, mu_p } => {
             let he = density * diameter * diameter * tau0 / (mu_p * mu_p);
-            let (re_b, phi_c) = hanks_critical(he);
-            // In laminar Bingham flow Re_MR = 8ρV²/τw = Re_B·(1 − 4φ/3 + φ⁴/3), so the
-            // critical Re_B converts to the generalized number at φc (derived from
-            // Buckingham–Reiner).
-            let g = 1.0 - 4.0 * phi_c / 3.0 + phi_c.powi(4) / 3.0;
+            let (re, phi_c) = hanks_generalized(he);
             (
-                re_b * g,
+                re,
                 CriticalRule::Hanks {
                     hedstrom: he,
                     phi_c,
                 },
             )
         }
-        Model::HerschelBulkley { .. } | Model::Casson { .. } => (
-            ryan_johnson(n_prime),
-            CriticalRule::RyanJohnsonLocal { n_prime },
-        ),
+        Model::HerschelBulkley { .. } | Model::Casson { .. } => {
+            let tau0 = model.yield_stress();
+            let slope = tangent_slope(model, wall_rate);
+            let he = if tau0 > 0.0 && slope > 0.0 {
+                density * diameter * diameter * tau0 / (slope * slope)
+            } else {
+                0.0
+            };
+            let rj = ryan_johnson(n_prime);
+            let hanks = if he > 0.0 {
+                hanks_generalized(he).0
+            } else {
+                0.0
+            };
+            let rule = CriticalRule::YieldStressLocal {
+                n_prime,
+                tangent_hedstrom: he,
+                ryan_johnson: rj,
+                hanks,
+            };
+            (rj.max(hanks), rule)
+        }
     }
+}
+
+/// Hanks' critical Re_B as a generalized Reynolds number: in laminar Bingham flow
+/// Re_MR = 8ρV²/τw = Re_B·(1 − 4φ/3 + φ⁴/3), so it converts at φc (derived from
+/// Buckingham–Reiner).
+fn hanks_generalized(hedstrom: f64) -> (f64, f64) {
+    let (re_b, phi_c) = hanks_critical(hedstrom);
+    let g = 1.0 - 4.0 * phi_c / 3.0 + phi_c.powi(4) / 3.0;
+    (re_b * g, phi_c)
+}
+
+/// dτ/dγ̇ of the flow curve at a shear rate, by a central difference.
+fn tangent_slope(model: &Model, rate: f64) -> f64 {
+    if !(rate.is_finite() && rate > 0.0) {
+        return 0.0;
+    }
+    let h = 1e-6 * rate;
+    (model.stress(rate + h) - model.stress(rate - h)) / (2.0 * h)
 }
 
 /// The generalized Reynolds number where the turbulent correlations are taken to hold fully:

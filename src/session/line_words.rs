@@ -141,9 +141,14 @@ pub fn critical_rule(rule: &CriticalRule) -> String {
         CriticalRule::Newtonian => "the Newtonian value".into(),
         CriticalRule::RyanJohnson { n } => format!("Ryan–Johnson at n = {n:.2}"),
         CriticalRule::Hanks { hedstrom, .. } => format!("Hanks at He = {hedstrom:.3e}"),
-        CriticalRule::RyanJohnsonLocal { n_prime } => {
-            format!("Ryan–Johnson at the local n′ = {n_prime:.2} (our choice for this model)")
-        }
+        CriticalRule::YieldStressLocal {
+            n_prime,
+            tangent_hedstrom,
+            ryan_johnson,
+            hanks,
+        } => format!(
+            "the larger of Ryan–Johnson at the local n′ = {n_prime:.2} ({ryan_johnson:.0}) and              Hanks for the tangent Bingham plastic at He = {tangent_hedstrom:.3e} ({hanks:.0});              our choice for this model"
+        ),
     }
 }
 
