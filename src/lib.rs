@@ -18,6 +18,8 @@ pub mod site;
 
 pub mod journal;
 
+pub mod line;
+
 pub mod session;
 
 pub mod present;
@@ -29,7 +31,5 @@ pub mod tui;
 pub mod text;
 
 pub mod readings;
-
-pub mod line;
 
 pub mod pump;

@@ -265,8 +265,33 @@ fn site_pump_has_an_operating_point() {
     // P-2 measured volumetric efficiency 92 %: 0.42 L/rev × 5 rev/s × 0.92.
     assert!(rel(pd["flow_m3_s"].as_f64().unwrap(), 0.42e-3 * 5.0 * 0.92) < 1e-9);
     assert!(pd["operating_point"]["pressure_pa"].as_f64().is_some());
+    // With the site's nominal constants the pump answers from them, and says so.
+    let nominal = json(&["pump", "--pump", "P-1", "--product", "chilli-sauce"]);
+    assert!(nominal["operating_point"]["flow_m3_s"].as_f64().is_some());
+    // A product with no nominal block and no flags is refused with what to give.
+    let demo = std::fs::read_to_string("site-configs/demo.toml").unwrap();
+    let cut = demo.replacen(
+        "[product.nominal]\nmodel = \"power-law\"                    # newtonian, power-law, bingham, herschel-bulkley, casson\nk = 15                                 # consistency index K, Pa·s^n\nn = 0.38                               # flow behaviour index\n",
+        "",
+        1,
+    );
+    assert_ne!(
+        cut, demo,
+        "the demo's chilli-sauce nominal block moved; update this test"
+    );
+    let mut site = tempfile::NamedTempFile::new().unwrap();
+    site.write_all(cut.as_bytes()).unwrap();
+    let path = site.path().to_str().unwrap();
     refused(
-        &["pump", "--pump", "P-1", "--product", "chilli-sauce"],
+        &[
+            "--site",
+            path,
+            "pump",
+            "--pump",
+            "P-1",
+            "--product",
+            "chilli-sauce",
+        ],
         "no nominal flow curve",
     );
 }

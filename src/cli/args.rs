@@ -45,6 +45,8 @@ pub enum Command {
     Trend(TrendArgs),
     /// Power, torque and caverns for an agitated tank; viscosity from a motor reading.
     Mix(Box<super::mix::args::MixArgs>),
+    /// Pressure drop in a line for a flow, or the flow for a pressure drop.
+    Line(Box<super::line_args::LineArgs>),
     /// Will a line restart after a stop, and the longest safe stop (gel build-up at rest).
     Restart(super::restart::RestartArgs),
     /// A pump on a viscous product: ANSI/HI 9.6.7 correction, duty point, PD slip and relief.
@@ -63,13 +65,15 @@ impl Command {
             Command::Mix(_) => "mix",
             Command::Restart(_) => "restart",
             Command::Pump(_) => "pump",
+            Command::Line(_) => "line",
         }
     }
 }
 
 #[derive(Debug, Args)]
 pub struct FitArgs {
-    /// CSV with header `rpm,dial` or `shear_rate,shear_stress` (SI), optional `temperature`.
+    /// CSV with header `rpm,dial` or `shear_rate,shear_stress` (SI), optional `temperature`;
+    /// or plant readings `flow,pressure_drop` with --diameter/--length or --line.
     pub file: PathBuf,
     /// Viscometer geometry when the CSV holds rpm and dial readings.
     #[arg(long, value_name = "NAME")]
@@ -89,6 +93,8 @@ pub struct FitArgs {
     /// One JSON object on stdout, SI units.
     #[arg(long)]
     pub json: bool,
+    #[command(flatten)]
+    pub pipe: super::fit_pipe::PipeFitArgs,
 }
 
 #[derive(Debug, Args)]

@@ -14,6 +14,9 @@ use anyhow::{Context, Result, bail};
 use std::process::ExitCode;
 
 pub fn run(cli: &Cli, args: &FitArgs) -> Result<ExitCode> {
+    if let Some(code) = super::fit_pipe::run_if_pipe(cli, args)? {
+        return Ok(code);
+    }
     let opts = options(args)?;
     let site = load_site(cli)?;
     let data = fit_csv::read(&args.file)?;
@@ -82,7 +85,7 @@ fn print_series(
     Ok(())
 }
 
-fn options(args: &FitArgs) -> Result<FlowCurveOptions> {
+pub(super) fn options(args: &FitArgs) -> Result<FlowCurveOptions> {
     let model: ModelPick = args
         .model
         .parse()

@@ -21,7 +21,8 @@ pub struct CsvData {
 }
 
 const ACCEPTED_HEADERS: &str = "'rpm,dial' (needs --geometry or --site/--viscometer) or 'shear_rate,shear_stress' (1/s, Pa), \
-     each optionally with 'temperature' (bare numbers in °C, or with a unit: '25 C', '77 F', '298 K')";
+     each optionally with 'temperature' (bare numbers in °C, or with a unit: '25 C', '77 F', '298 K'); \
+     or plant readings 'flow,pressure_drop' (with --diameter D --length L or --line ID)";
 
 pub fn read(path: &Path) -> Result<CsvData> {
     let text = std::fs::read_to_string(path)

@@ -7,7 +7,12 @@ mod check_site;
 mod fit;
 mod fit_csv;
 mod fit_output;
+mod fit_pipe;
+mod fit_pipe_output;
 mod gel_csv;
+mod line;
+pub mod line_args;
+mod line_print;
 mod mix;
 mod pump;
 mod pump_output;
@@ -38,6 +43,7 @@ pub fn run(cli: &Cli, command: &Command) -> anyhow::Result<ExitCode> {
         Command::Mix(a) => mix::run(cli, a),
         Command::Restart(a) => restart::run(cli, a),
         Command::Pump(a) => pump::run(cli, a),
+        Command::Line(a) => line::run(cli, a),
     }
 }
 

@@ -47,6 +47,7 @@ pub(crate) fn assemble(solved: Solved, d: &Data, weighting: Weighting) -> Fit {
     let m = d.x.len();
     let dof = m - solved.free();
     let estimates = estimates(&solved, dof);
+    let covariance = covariance(&solved, dof);
     let residuals_pa: Vec<f64> =
         d.x.iter()
             .zip(d.y)
@@ -63,6 +64,7 @@ pub(crate) fn assemble(solved: Solved, d: &Data, weighting: Weighting) -> Fit {
     Fit {
         model: solved.model,
         estimates,
+        covariance,
         r_squared: r_squared(d.y, raw_ssr),
         rmse_pa: (raw_ssr / m as f64).sqrt(),
         aicc: aicc(solved.ssr, m, kind.param_count(), rms_w),
@@ -92,6 +94,30 @@ fn estimates(solved: &Solved, dof: usize) -> Vec<Estimate> {
         with_interval(name, value, variance, t)
     };
     solved.model.params().into_iter().map(&mut one).collect()
+}
+
+/// s²(JᵀJ)⁻¹ spread over every parameter, zeros for one held at its bound.
+fn covariance(solved: &Solved, dof: usize) -> Option<Vec<Vec<f64>>> {
+    let s2 = (dof > 0).then(|| solved.ssr / dof as f64)?;
+    let inv = solved.jtj_inv.as_ref()?;
+    let names = solved.model.kind().param_names();
+    let free: Vec<Option<usize>> = names
+        .iter()
+        .scan(0, |next, name| {
+            Some((solved.at_bound != Some(*name)).then(|| {
+                *next += 1;
+                *next - 1
+            }))
+        })
+        .collect();
+    let cell = |i: usize, j: usize| match (free[i], free[j]) {
+        (Some(a), Some(b)) => s2 * inv[a][b],
+        _ => 0.0,
+    };
+    let c: Vec<Vec<f64>> = (0..names.len())
+        .map(|i| (0..names.len()).map(|j| cell(i, j)).collect())
+        .collect();
+    c.iter().flatten().all(|v| v.is_finite()).then_some(c)
 }
 
 /// SE = √variance and CI = value ± t·SE, or no interval with the reason.

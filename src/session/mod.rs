@@ -6,6 +6,9 @@
 
 pub mod duration;
 pub mod flow_curve;
+pub mod line;
+pub mod line_plant;
+pub mod line_words;
 pub mod pump;
 mod pump_site;
 pub mod pump_words;
@@ -14,6 +17,7 @@ pub mod restart_chart;
 mod restart_notes;
 mod restart_site;
 pub mod restart_words;
+pub mod rheology_shift;
 pub mod rheology_source;
 pub mod state;
 pub mod system_curve;

@@ -7,16 +7,14 @@
 //! temperature (Steffe 1996, *Rheological Methods in Food Process Engineering*, §1.10), and the
 //! yield stress is taken as measured because it has no general temperature law.
 
+use super::rheology_shift::shift_for;
+pub use super::rheology_shift::{Shift, scale_viscosity};
 use super::state::SessionState;
 use super::temperature::viscosity_parameter;
-use crate::rheology::temperature::arrhenius_factor;
 use crate::rheology::{Fit, Model, ParamName};
-use crate::site::{Product, Site};
+use crate::site::{NominalCurve, Product, Site};
 use chrono::{DateTime, Utc};
 use std::path::{Path, PathBuf};
-
-/// Temperatures closer than this are the same for the shift (a thermometer's resolution), K.
-const SAME_TEMPERATURE_K: f64 = 0.05;
 
 /// What the caller asks for: each part optional, checked by [`resolve`].
 #[derive(Debug, Clone, Default)]
@@ -45,34 +43,6 @@ pub enum Origin {
     },
     /// The nominal constants of the product in the site config.
     SiteNominal { product: String },
-}
-
-/// How the curve was brought to the requested temperature.
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub enum Shift {
-    /// No temperature asked for, or the curve is already at it.
-    NotNeeded,
-    /// Viscosity parameter multiplied by `factor` = exp[(Ea/R)(1/T − 1/T_ref)].
-    Arrhenius {
-        ea_j_per_mol: f64,
-        from_k: f64,
-        to_k: f64,
-        factor: f64,
-    },
-    /// The temperatures differ but the product has no activation energy: not shifted.
-    NoActivationEnergy { from_k: f64, to_k: f64 },
-    /// A temperature was asked for but the curve's own temperature is unknown: not shifted.
-    SourceTemperatureUnknown { to_k: f64 },
-}
-
-impl Shift {
-    /// The factor applied to the viscosity parameter (1 when not shifted).
-    pub fn factor(&self) -> f64 {
-        match *self {
-            Shift::Arrhenius { factor, .. } => factor,
-            _ => 1.0,
-        }
-    }
 }
 
 /// The curve to use, with where it came from and at what temperature.
@@ -115,44 +85,11 @@ impl Resolved {
                 format!("the site's nominal constants for {product}")
             }
         };
-        format!(
-            "{} curve from {from}; {}",
-            self.model.kind(),
-            self.shift_words()
-        )
-    }
-
-    fn shift_words(&self) -> String {
-        let c = |k: f64| k - 273.15;
-        let p = self.shifted_parameter.symbol();
-        match self.shift {
-            Shift::NotNeeded => match self.applies_at_k.or(self.measured_at_k) {
-                Some(t) => format!("taken at {:.1} °C", c(t)),
-                None => "temperature not stated".to_string(),
-            },
-            Shift::Arrhenius {
-                ea_j_per_mol,
-                from_k,
-                to_k,
-                factor,
-            } => format!(
-                "{p} shifted from {:.1} °C to {:.1} °C by ×{factor:.3} (Arrhenius, Ea {:.0} kJ/mol); \
-                 n and the yield stress as measured",
-                c(from_k),
-                c(to_k),
-                ea_j_per_mol / 1000.0
-            ),
-            Shift::NoActivationEnergy { from_k, to_k } => format!(
-                "measured at {:.1} °C, not shifted to {:.1} °C because the product has no \
-                 activation energy in the site config",
-                c(from_k),
-                c(to_k)
-            ),
-            Shift::SourceTemperatureUnknown { to_k } => format!(
-                "not shifted to {:.1} °C because the curve's own temperature was not recorded",
-                c(to_k)
-            ),
-        }
+        let shift = self.shift.words(
+            self.shifted_parameter,
+            self.applies_at_k.or(self.measured_at_k),
+        );
+        format!("{} curve from {from}; {shift}", self.model.kind())
     }
 }
 
@@ -195,10 +132,6 @@ pub fn resolve(site: &Site, req: &SourceRequest) -> Result<Resolved, SourceError
         (None, Some(path)) => from_journal(site, path, req.product.as_deref())?,
         (None, None) => from_site(product.as_ref())?,
     };
-    let measured_at_k = measured_at_k.or(match origin {
-        Origin::SiteNominal { .. } => product.as_ref().map(|p| p.reference_temperature_k),
-        _ => None,
-    });
     let shift = shift_for(product.as_ref(), measured_at_k, req.temperature_k);
     let shifted_parameter = viscosity_parameter(measured.kind());
     Ok(Resolved {
@@ -265,55 +198,48 @@ fn from_journal(site: &Site, path: &Path, product: Option<&str>) -> Result<Found
     ))
 }
 
-/// The site's nominal constants for the product (none in this schema yet).
+/// The site's nominal constants for the product, at its reference temperature.
 fn from_site(product: Option<&Product>) -> Result<Found, SourceError> {
-    match product {
-        None => Err(SourceError::NothingGiven),
-        Some(p) => Err(SourceError::NoNominal {
+    let Some(p) = product else {
+        return Err(SourceError::NothingGiven);
+    };
+    let Some(nominal) = p.nominal else {
+        return Err(SourceError::NoNominal {
             product: p.name.clone(),
-        }),
-    }
+        });
+    };
+    let origin = Origin::SiteNominal {
+        product: p.name.clone(),
+    };
+    Ok((
+        nominal_model(nominal),
+        None,
+        origin,
+        Some(p.reference_temperature_k),
+    ))
 }
 
-/// The shift from the curve's temperature to the requested one.
-fn shift_for(product: Option<&Product>, from: Option<f64>, to: Option<f64>) -> Shift {
-    let Some(to_k) = to else {
-        return Shift::NotNeeded;
-    };
-    let Some(from_k) = from else {
-        return Shift::SourceTemperatureUnknown { to_k };
-    };
-    if (from_k - to_k).abs() <= SAME_TEMPERATURE_K {
-        return Shift::NotNeeded;
-    }
-    match product.and_then(|p| p.activation_energy_j_mol) {
-        Some(ea) => Shift::Arrhenius {
-            ea_j_per_mol: ea,
-            from_k,
-            to_k,
-            factor: arrhenius_factor(ea, to_k, from_k),
+/// The site schema's nominal curve as a flow model.
+pub fn nominal_model(n: NominalCurve) -> Model {
+    match n {
+        NominalCurve::Newtonian { mu_pa_s } => Model::Newtonian { mu: mu_pa_s },
+        NominalCurve::PowerLaw { k_pa_sn, n } => Model::PowerLaw { k: k_pa_sn, n },
+        NominalCurve::Bingham { tau0_pa, mu_p_pa_s } => Model::Bingham {
+            tau0: tau0_pa,
+            mu_p: mu_p_pa_s,
         },
-        None => Shift::NoActivationEnergy { from_k, to_k },
-    }
-}
-
-/// The model with its viscosity parameter (μ, K, μp or μc) multiplied by `factor`.
-pub fn scale_viscosity(model: Model, factor: f64) -> Model {
-    match model {
-        Model::Newtonian { mu } => Model::Newtonian { mu: mu * factor },
-        Model::PowerLaw { k, n } => Model::PowerLaw { k: k * factor, n },
-        Model::Bingham { tau0, mu_p } => Model::Bingham {
-            tau0,
-            mu_p: mu_p * factor,
-        },
-        Model::HerschelBulkley { tau0, k, n } => Model::HerschelBulkley {
-            tau0,
-            k: k * factor,
+        NominalCurve::HerschelBulkley {
+            tau0_pa,
+            k_pa_sn,
+            n,
+        } => Model::HerschelBulkley {
+            tau0: tau0_pa,
+            k: k_pa_sn,
             n,
         },
-        Model::Casson { tau0, mu_c } => Model::Casson {
-            tau0,
-            mu_c: mu_c * factor,
+        NominalCurve::Casson { tau0_pa, mu_c_pa_s } => Model::Casson {
+            tau0: tau0_pa,
+            mu_c: mu_c_pa_s,
         },
     }
 }
@@ -321,6 +247,7 @@ pub fn scale_viscosity(model: Model, factor: f64) -> Model {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::session::rheology_shift::shift_for;
 
     #[test]
     fn flags_at_their_own_temperature_are_not_shifted() {

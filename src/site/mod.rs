@@ -11,6 +11,7 @@ mod errors;
 mod fields;
 mod line;
 mod model;
+mod nominal;
 mod product;
 mod pump;
 mod raw;
@@ -25,8 +26,8 @@ mod viscometer;
 
 pub use errors::{ErrorKind, SiteError, SiteErrors};
 pub use model::{
-    Baffles, CurvePoint, EquipmentKind, GelBuildUp, Impeller, LimitProperty, Line, Product, Pump,
-    PumpKind, RibbonShape, Site, SpecLimit, Tank, TankConstants, Viscometer,
+    Baffles, CurvePoint, EquipmentKind, GelBuildUp, Impeller, LimitProperty, Line, NominalCurve,
+    Product, Pump, PumpKind, RibbonShape, Site, SpecLimit, Tank, TankConstants, Viscometer,
 };
 pub use pump::MIN_CURVE_POINTS;
 pub use summary::summary;

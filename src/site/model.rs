@@ -31,6 +31,20 @@ pub struct Product {
     pub activation_energy_j_mol: Option<f64>,
     pub gel: Option<GelBuildUp>,
     pub limits: Vec<SpecLimit>,
+    /// Nominal flow curve at the reference temperature, when the site gives one.
+    pub nominal: Option<NominalCurve>,
+}
+
+/// A product's nominal flow curve at its reference temperature, SI (Pa, Pa·s, Pa·sⁿ). The
+/// same five models as the fit; the session turns it into a `rheology::Model`.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+#[serde(rename_all = "kebab-case", tag = "model")]
+pub enum NominalCurve {
+    Newtonian { mu_pa_s: f64 },
+    PowerLaw { k_pa_sn: f64, n: f64 },
+    Bingham { tau0_pa: f64, mu_p_pa_s: f64 },
+    HerschelBulkley { tau0_pa: f64, k_pa_sn: f64, n: f64 },
+    Casson { tau0_pa: f64, mu_c_pa_s: f64 },
 }
 
 /// Static yield stress rebuilding at rest, τy(t) = τ∞ − (τ∞ − τ0)·e^(−t/t_r)

@@ -14,6 +14,7 @@ pub(crate) const PRODUCT_KEYS: &[&str] = &[
     "activation_energy",
     "gel",
     "limit",
+    "nominal",
 ];
 const GEL_KEYS: &[&str] = &["initial", "long_rest", "rebuild_time"];
 const LIMIT_KEYS: &[&str] = &["property", "min", "max", "shear_rate"];
@@ -68,6 +69,9 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Product> {
         Need::Optional,
     );
     let gel = t.table("gel", GEL_KEYS, sink).map(|g| gel(&g, sink));
+    let nominal = t
+        .table("nominal", super::nominal::NOMINAL_KEYS, sink)
+        .map(|n| super::nominal::build(&n, sink));
     let limits: Vec<Option<SpecLimit>> = t
         .tables("limit", LIMIT_KEYS, sink)
         .iter()
@@ -80,6 +84,7 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Product> {
         reference_temperature_k: reference?,
         activation_energy_j_mol: ea,
         gel: gel.flatten(),
+        nominal: nominal.flatten(),
         limits: limits.into_iter().collect::<Option<Vec<_>>>()?,
     })
 }

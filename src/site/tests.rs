@@ -341,3 +341,53 @@ fn unreadable_and_oversized_files() {
     let e = load_file(&latin1).expect_err("not UTF-8").0;
     assert!(e[0].message.contains("not UTF-8"), "{}", e[0]);
 }
+
+const PRODUCT: &str = "[[product]]\nname = \"p\"\ndensity = \"1100 kg/m3\"\n\
+                       reference_temperature = \"20 C\"\n[product.nominal]\n";
+
+#[test]
+fn demo_products_carry_nominal_curves() {
+    let site = demo().expect("demo");
+    let nominal = |name: &str| site.product(name).and_then(|p| p.nominal);
+    assert_eq!(
+        nominal("chilli-sauce"),
+        Some(NominalCurve::PowerLaw {
+            k_pa_sn: 15.0,
+            n: 0.38
+        })
+    );
+    assert!(matches!(
+        nominal("filler-paste"),
+        Some(NominalCurve::HerschelBulkley { tau0_pa, .. }) if close(tau0_pa, 160.0)
+    ));
+    // 0.25 Pa.s = 0.25 Pa·s; 35 Pa.
+    assert_eq!(
+        nominal("chalk-slurry"),
+        Some(NominalCurve::Bingham {
+            tau0_pa: 35.0,
+            mu_p_pa_s: 0.25
+        })
+    );
+}
+
+#[test]
+fn nominal_curve_takes_only_its_models_constants() {
+    let ok = format!("{PRODUCT}model = \"bingham\"\ntau0 = \"5 Pa\"\nmu_p = \"120 cP\"\n");
+    assert!(errors(&ok).is_empty(), "{:#?}", errors(&ok));
+    one_error_containing(
+        &format!("{PRODUCT}model = \"bingham\"\ntau0 = \"5 Pa\"\nmu_p = \"1 Pa.s\"\nk = 3\n"),
+        "not a constant of this model; it takes tau0 and mu_p",
+    );
+    one_error_containing(
+        &format!("{PRODUCT}model = \"herschel-bulkley\"\ntau0 = \"5 Pa\"\nk = 3\n"),
+        "missing field 'n' in [product.nominal]",
+    );
+    one_error_containing(
+        &format!("{PRODUCT}model = \"plastic\"\nmu = \"1 Pa.s\"\n"),
+        "use one of 'newtonian', 'power-law'",
+    );
+    one_error_containing(
+        &format!("{PRODUCT}model = \"power-law\"\nk = 3\nn = 30\n"),
+        "must be between 0.05 and 3",
+    );
+}

@@ -64,6 +64,10 @@ pub struct Fit {
     pub model: Model,
     /// In the order of [`ModelKind::param_names`].
     pub estimates: Vec<Estimate>,
+    /// C = s²(JᵀJ)⁻¹ in the order of [`ModelKind::param_names`] (the matrix the intervals
+    /// use); a parameter held at its bound has a zero row and column. `None` with no degrees
+    /// of freedom or a singular JᵀJ.
+    pub covariance: Option<Vec<Vec<f64>>>,
     /// On raw stress, unweighted.
     pub r_squared: f64,
     /// √(Σ(τ − τ̂)²/m), Pa, unweighted.
