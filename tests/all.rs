@@ -5,6 +5,7 @@
 mod support;
 
 mod cli_fit;
+mod fit_truth;
 mod instrument;
 mod journal;
 mod journal_crash;

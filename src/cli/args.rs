@@ -61,9 +61,14 @@ pub struct FitArgs {
     /// Use the Newtonian (Margules) shear rate instead of the n-corrected one.
     #[arg(long)]
     pub no_rate_correction: bool,
-    /// `relative` weights each point by 1/stress, for data spanning decades.
+    /// `none` (default), `relative` (each point by 1/stress, for data spanning decades) or
+    /// `log` (least squares on ln stress, as published constants are usually fitted).
     #[arg(long, value_name = "WEIGHT")]
     pub weight: Option<String>,
+    /// Keep readings at or above full scale (pegged dial) in the fit; by default they are
+    /// left out and listed.
+    #[arg(long)]
+    pub include_off_scale: bool,
     /// One JSON object on stdout, SI units.
     #[arg(long)]
     pub json: bool,

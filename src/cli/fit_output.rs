@@ -2,6 +2,7 @@
 
 use crate::rheology::{Estimate, Fit, ParamName};
 use crate::session::FlowCurve;
+use crate::session::checks::r_squared_text;
 use crate::session::temperature::TemperatureSeries;
 use crate::units::{self, Dimension, UnitSystem};
 use serde_json::{Map, Value, json};
@@ -45,6 +46,7 @@ pub fn table(curve: &FlowCurve, system: UnitSystem, temperature_k: Option<f64>) 
     let _ = writeln!(out, "{}", quality_line(fit, system));
     out.push_str(&candidates_table(curve));
     out.push_str(&points_table(curve, system));
+    out.push_str(&super::fit_extra::sections(curve, system));
     for w in &curve.warnings {
         let _ = writeln!(out, "  ! {w}");
     }
@@ -63,7 +65,10 @@ fn estimate_row(e: &Estimate, system: UnitSystem) -> String {
             param_text(e.name, lo, system),
             param_text(e.name, hi, system)
         ),
-        None => "not available (too few points)".to_string(),
+        None => format!(
+            "not available ({})",
+            e.no_ci.map_or("not computed", |why| why.explain())
+        ),
     };
     let bound = if e.at_bound {
         "  (held at its bound)"
@@ -97,8 +102,8 @@ fn quality_line(fit: &Fit, system: UnitSystem) -> String {
         .aicc
         .map_or("not available".to_string(), |a| format!("{a:.2}"));
     format!(
-        "  fit quality: R² {:.5}   RMSE {}   AICc {aicc}   degrees of freedom {}",
-        fit.r_squared,
+        "  fit quality: R² {}   RMSE {}   AICc {aicc}   degrees of freedom {}",
+        r_squared_text(fit.r_squared, 5),
         units::format(fit.rmse_pa, Dimension::Stress, system),
         fit.dof
     )
@@ -112,10 +117,10 @@ fn candidates_table(curve: &FlowCurve) -> String {
     for c in &choice.candidates {
         let line = match &c.outcome {
             Ok(fit) => format!(
-                "    {:<18} AICc {:>9}   R² {:.5}",
+                "    {:<18} AICc {:>9}   R² {}",
                 c.kind.title(),
                 fit.aicc.map_or("—".to_string(), |a| format!("{a:.2}")),
-                fit.r_squared
+                r_squared_text(fit.r_squared, 5)
             ),
             Err(e) => format!("    {:<18} not fitted: {e}", c.kind.title()),
         };
@@ -131,11 +136,11 @@ fn points_table(curve: &FlowCurve, system: UnitSystem) -> String {
         "    {:>3} {:>7} {:>7} {:>15} {:>15} {:>11}  flags",
         "#", "rpm", "dial", "Newtonian rate", "rate used", "stress"
     );
-    for (i, p) in curve.points.iter().enumerate() {
+    for p in &curve.points {
         let opt = |v: Option<f64>| v.map_or("—".to_string(), units::significant);
         let row = format!(
             "    {:>3} {:>7} {:>7} {:>11} 1/s {:>11} 1/s {:>11}  {}",
-            i + 1,
+            p.row,
             opt(p.rpm),
             opt(p.dial),
             units::significant(p.newtonian_shear_rate_per_s),
@@ -207,10 +212,10 @@ pub fn series_table(series: &TemperatureSeries, system: UnitSystem) -> String {
             .collect();
         let _ = writeln!(
             out,
-            "  {:>9}   {}   R² {:.4}",
+            "  {:>9}   {}   R² {}",
             units::format(c.temperature_k, Dimension::Temperature, system),
             params.join("   "),
-            c.curve.fit.r_squared
+            r_squared_text(c.curve.fit.r_squared, 4)
         );
     }
     let _ = match &series.activation {

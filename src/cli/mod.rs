@@ -5,6 +5,7 @@ mod args;
 mod check_site;
 mod fit;
 mod fit_csv;
+mod fit_extra;
 mod fit_output;
 mod record;
 mod report;

@@ -4,8 +4,14 @@
 //! `rheoside fit` and a number drawn on screen come from the same code path. Later
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
+pub mod api_rp13d;
+mod assess;
+pub mod checks;
+mod curve_checks;
 pub mod flow_curve;
 pub mod json;
+pub mod off_scale;
+mod points;
 pub mod state;
 pub mod temperature;
 pub mod trend;

@@ -118,8 +118,8 @@ fn quality(fit: &Fit, system: UnitSystem) -> String {
         .aicc
         .map_or("not available".to_string(), |a| format!("{a:.2}"));
     format!(
-        "Fit quality: R² {:.5}, RMSE {}, AICc {aicc}, degrees of freedom {}.",
-        fit.r_squared,
+        "Fit quality: R² {}, RMSE {}, AICc {aicc}, degrees of freedom {}.",
+        crate::session::checks::r_squared_text(fit.r_squared, 5),
         units::format(fit.rmse_pa, Dimension::Stress, system),
         fit.dof
     )
