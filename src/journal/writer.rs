@@ -40,6 +40,8 @@ pub struct JournalWriter<S: Sink = FileSink> {
     pending: VecDeque<Pending>,
     /// A failed append may have left bytes past `good_len`; cut them before the next try.
     dirty: bool,
+    /// The record most recently saved (kept so a resume can hand its own record back).
+    pub(crate) last_saved: Option<Record>,
 }
 
 impl<S: Sink> JournalWriter<S> {
@@ -56,6 +58,7 @@ impl<S: Sink> JournalWriter<S> {
             good_len: from.file_len,
             pending: VecDeque::new(),
             dirty: false,
+            last_saved: None,
         }
     }
 
@@ -143,7 +146,7 @@ impl<S: Sink> JournalWriter<S> {
         self.dirty = false;
         self.good_len += p.line.len() as u64;
         self.saved_through = seq;
-        self.pending.pop_front();
+        self.last_saved = self.pending.pop_front().map(|p| p.record);
         Ok(())
     }
 
