@@ -18,6 +18,7 @@ mod rheology_props;
 mod rheology_temperature;
 mod site;
 mod trend;
+mod trend_sets;
 mod tui_e2e;
 mod tui_keys;
 mod tui_render;

@@ -114,4 +114,8 @@ pub struct TrendArgs {
     /// How far back, e.g. 30d, 12h, 8w.
     #[arg(long, default_value = "30d")]
     pub since: String,
+    /// Property to chart: consistency-index (k), flow-index (n), yield-stress (tau0) or
+    /// apparent-viscosity (mu-a). Default: each property the product has a limit on.
+    #[arg(long, value_name = "NAME")]
+    pub property: Option<String>,
 }

@@ -15,6 +15,7 @@ mod points;
 pub mod state;
 pub mod temperature;
 pub mod trend;
+pub mod trend_property;
 
 pub use flow_curve::{
     FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, PointOut, analyse,
