@@ -84,7 +84,10 @@ pub fn load_file(path: &Path) -> Result<Site, SiteErrors> {
 }
 
 fn read_limited(path: &Path) -> Result<String, String> {
-    let file = std::fs::File::open(path).map_err(|e| e.to_string())?;
+    let file = std::fs::File::open(path).map_err(|e| match e.kind() {
+        std::io::ErrorKind::NotFound => "not found; check the path".to_string(),
+        _ => e.to_string(),
+    })?;
     let mut bytes = Vec::new();
     file.take(MAX_FILE_BYTES + 1)
         .read_to_end(&mut bytes)
