@@ -87,9 +87,14 @@ pub struct FitArgs {
     /// Use the Newtonian (Margules) shear rate instead of the n-corrected one.
     #[arg(long)]
     pub no_rate_correction: bool,
-    /// `relative` weights each point by 1/stress, for data spanning decades.
+    /// `none` (default), `relative` (each point by 1/stress, for data spanning decades) or
+    /// `log` (least squares on ln stress, as published constants are usually fitted).
     #[arg(long, value_name = "WEIGHT")]
     pub weight: Option<String>,
+    /// Keep readings at or above full scale (pegged dial) in the fit; by default they are
+    /// left out and listed.
+    #[arg(long)]
+    pub include_off_scale: bool,
     /// One JSON object on stdout, SI units.
     #[arg(long)]
     pub json: bool,
@@ -137,4 +142,8 @@ pub struct TrendArgs {
     /// How far back, e.g. 30d, 12h, 8w.
     #[arg(long, default_value = "30d")]
     pub since: String,
+    /// Property to chart: consistency-index (k), flow-index (n), yield-stress (tau0) or
+    /// apparent-viscosity (mu-a). Default: each property the product has a limit on.
+    #[arg(long, value_name = "NAME")]
+    pub property: Option<String>,
 }

@@ -6,6 +6,7 @@ use super::fit_output;
 use crate::instrument::Geometry;
 use crate::present::Style;
 use crate::rheology::Weighting;
+use crate::session::checks::OffScale;
 use crate::session::temperature::{TemperatureSeries, analyse_by_temperature};
 use crate::session::{self, FlowCurveInput, FlowCurveOptions, ModelPick};
 use crate::site::Site;
@@ -93,12 +94,21 @@ pub(super) fn options(args: &FitArgs) -> Result<FlowCurveOptions> {
     let weighting = match args.weight.as_deref() {
         None | Some("none") => Weighting::Unweighted,
         Some("relative") => Weighting::Relative,
-        Some(other) => bail!("--weight '{other}': accepted values are 'relative' or 'none'"),
+        Some("log") => Weighting::Log,
+        Some(other) => bail!(
+            "--weight '{}': accepted values are 'none', 'relative' or 'log'",
+            crate::text::sanitize(other, false)
+        ),
     };
     Ok(FlowCurveOptions {
         model,
         rate_correction: !args.no_rate_correction,
         weighting,
+        off_scale: if args.include_off_scale {
+            OffScale::Include
+        } else {
+            OffScale::LeaveOut
+        },
     })
 }
 

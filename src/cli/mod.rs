@@ -6,6 +6,7 @@ mod args;
 mod check_site;
 mod fit;
 mod fit_csv;
+mod fit_extra;
 mod fit_output;
 mod fit_pipe;
 mod fit_pipe_output;

@@ -24,7 +24,7 @@ pub(crate) struct Solved {
 }
 
 impl Solved {
-    fn new(model: Model, jtj_inv: Option<Mat3>, min: &Minimum) -> Self {
+    pub(crate) fn new(model: Model, jtj_inv: Option<Mat3>, min: &Minimum) -> Self {
         Solved {
             model,
             at_bound: None,
@@ -35,7 +35,7 @@ impl Solved {
     }
 
     /// Mark τ0 as held at zero, adding the iterations spent finding it out.
-    fn tau0_at_bound(mut self, extra_iterations: usize) -> Self {
+    pub(crate) fn tau0_at_bound(mut self, extra_iterations: usize) -> Self {
         self.at_bound = Some(ParamName::Tau0);
         self.iterations += extra_iterations;
         self
@@ -59,14 +59,19 @@ pub(crate) fn solve(kind: ModelKind, d: &Data) -> Result<Solved, FitError> {
     }
 }
 
-fn run<C: Curve>(kind: ModelKind, c: &C, d: &Data, start: Vec3) -> Result<Minimum, FitError> {
+pub(crate) fn run<C: Curve>(
+    kind: ModelKind,
+    c: &C,
+    d: &Data,
+    start: Vec3,
+) -> Result<Minimum, FitError> {
     minimise(c, d, start).map_err(|f| FitError::NotConverged {
         model: kind,
         iterations: f.iterations,
     })
 }
 
-fn jtj_inverse<C: Curve>(c: &C, d: &Data, beta: &Vec3) -> Option<Mat3> {
+pub(crate) fn jtj_inverse<C: Curve>(c: &C, d: &Data, beta: &Vec3) -> Option<Mat3> {
     inverse_spd(&normal(c, d, beta).jtj, c.p())
 }
 
@@ -109,6 +114,16 @@ fn bingham(d: &Data) -> Result<Solved, FitError> {
         return Ok(Solved::new(model, inv, &min).tau0_at_bound(0));
     }
     let min = run(kind, &Line, d, [a, b, 0.0])?;
+    // The bound is held on the minimiser's result too: rounding on extreme readings can carry
+    // τ0 below zero even from a start above it.
+    if min.beta[0] < 0.0 {
+        let (lin, inv) = origin_line(kind, d)?;
+        let model = Model::Bingham {
+            tau0: 0.0,
+            mu_p: lin.beta[0],
+        };
+        return Ok(Solved::new(model, inv, &lin).tau0_at_bound(min.iterations));
+    }
     let model = Model::Bingham {
         tau0: min.beta[0],
         mu_p: min.beta[1],
