@@ -19,7 +19,7 @@ pub fn run(cli: &Cli, args: &FitArgs) -> Result<ExitCode> {
         return Ok(code);
     }
     let opts = options(args)?;
-    let site = load_site(cli)?;
+    let site = load_site(cli, args)?;
     let data = fit_csv::read(&args.file)?;
     let geometry = match &data.readings {
         Readings::Dial(_) => Some(geometry(args, site.as_ref())?),
@@ -112,10 +112,12 @@ pub(super) fn options(args: &FitArgs) -> Result<FlowCurveOptions> {
     })
 }
 
-fn load_site(cli: &Cli) -> Result<Option<Site>> {
-    match &cli.site {
-        None => Ok(None),
-        Some(path) => crate::site::load_or_demo(Some(path))
+/// The site given, or the bundled demo site when a viscometer is named without one (as
+/// `--site`'s help promises); no site at all for a plain `--geometry` fit.
+fn load_site(cli: &Cli, args: &FitArgs) -> Result<Option<Site>> {
+    match (&cli.site, &args.viscometer) {
+        (None, None) => Ok(None),
+        (path, _) => crate::site::load_or_demo(path.as_deref())
             .map(Some)
             .map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}")),
     }
@@ -137,7 +139,7 @@ fn geometry(args: &FitArgs, site: Option<&Site>) -> Result<Geometry> {
                     )
                 })
         }
-        (None, Some(_), None) => bail!("--viscometer needs --site FILE to look the viscometer up"),
+        (None, Some(_), None) => bail!("--viscometer needs a site config to look it up in"),
         (Some(_), Some(_), _) => bail!("give either --geometry or --viscometer, not both"),
         (None, None, _) => bail!(
             "rpm/dial readings need a geometry: --geometry standard-six-speed, or --site FILE --viscometer ID"

@@ -4,6 +4,7 @@
 
 mod args;
 mod check_site;
+mod examples;
 mod fit;
 mod fit_csv;
 mod fit_extra;

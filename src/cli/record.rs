@@ -14,7 +14,7 @@ use crate::readings::parse_reading_arg_at;
 use crate::site::Site;
 use anyhow::bail;
 use std::io::Write;
-use std::path::{Path, PathBuf};
+use std::path::Path;
 use std::process::ExitCode;
 
 /// The journal could not be opened or a record could not be saved: worth retrying
@@ -102,7 +102,7 @@ fn check(cli: &Cli, args: &RecordArgs) -> anyhow::Result<Plan> {
     if !errors.is_empty() {
         bail!("nothing was written:\n  {}", errors.join("\n  "));
     }
-    let operator = match &cli.operator {
+    let operator = match args.operator(cli) {
         Some(o) => crate::text::sanitize(o, false),
         None => os_user(),
     };
@@ -145,7 +145,7 @@ fn open(cli: &Cli, args: &RecordArgs, plan: &Plan) -> Result<JournalWriter, Open
     let clock = Box::new(SystemClock);
     let Some(path) = &args.session else {
         let new = NewSession {
-            log_dir: cli.log_dir.clone().unwrap_or_else(|| PathBuf::from("logs")),
+            log_dir: args.log_dir(cli),
             site_id: plan.site.id.clone(),
             site_source: plan.site_source.clone(),
             operator: plan.operator.clone(),

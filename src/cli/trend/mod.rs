@@ -11,7 +11,6 @@ mod scan;
 use crate::session::trend::{TrendBuilder, find_product, parse_since};
 use crate::session::trend_property::{limited_properties, parse_property};
 use crate::site::Site;
-use std::path::PathBuf;
 use std::process::ExitCode;
 
 pub fn run(cli: &Cli, args: &TrendArgs) -> anyhow::Result<ExitCode> {
@@ -23,7 +22,7 @@ pub fn run(cli: &Cli, args: &TrendArgs) -> anyhow::Result<ExitCode> {
         None => limited_properties(product),
     };
     let now = chrono::Utc::now();
-    let dir = cli.log_dir.clone().unwrap_or_else(|| PathBuf::from("logs"));
+    let dir = args.log_dir(cli);
     let mut builder = TrendBuilder::new(&site, product, now, window);
     let scan = scan::scan_dir(&dir, &product.name, &mut builder)?;
     let trend = builder.finish();
