@@ -34,4 +34,5 @@ mod trend;
 mod tui_e2e;
 mod tui_keys;
 mod tui_render;
+mod tui_restart;
 mod units;

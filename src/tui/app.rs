@@ -137,6 +137,13 @@ impl App {
             let pick_before = self.pick_of_choice(record);
             self.ctx.session.apply(&self.ctx.site, record);
             self.answer(record, pick_before);
+            let ctx = &self.ctx;
+            let effects: Vec<Effect> = self
+                .views
+                .iter_mut()
+                .flat_map(|v| v.answer(record, ctx))
+                .collect();
+            self.apply(effects);
         }
         if !reply.records.is_empty() {
             self.refresh_views();
