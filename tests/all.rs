@@ -33,6 +33,7 @@ mod site_tank;
 mod trend;
 mod tui_e2e;
 mod tui_keys;
+mod tui_line;
 mod tui_render;
 mod tui_restart;
 mod units;

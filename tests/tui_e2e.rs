@@ -445,8 +445,8 @@ fn the_pump_will_not_start_after_a_stop_end_to_end() {
     s.wait_for("* L-2");
     s.send("\x1b[B\r");
     s.wait_for("* filler-paste");
-    // Tab through Readings and Flow curve to Restart.
-    s.send("\t\t\t");
+    // Tab through Readings, Flow curve and Line to Restart.
+    s.send("\t\t\t\t");
     s.wait_for_all(&["< L-2 >", "< P-2 >", "Gel readings"]);
     // Down twice into the first gel stress; Tab, Tab to the next row's gel stress.
     s.send("\x1b[B\x1b[B");

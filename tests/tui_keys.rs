@@ -190,6 +190,7 @@ fn tab_and_shift_tab_walk_the_views() {
             views::site::ID,
             views::readings::ID,
             views::curve::ID,
+            views::line::ID,
             views::restart::ID,
             views::journal::ID,
             views::site::ID

@@ -351,8 +351,14 @@ impl App {
         for effect in effects {
             match effect {
                 Effect::Status(s) => self.status = s,
-                Effect::PickEquipment(id) => self.ctx.picks.equipment = Some(id),
-                Effect::PickProduct(p) => self.ctx.picks.product = Some(p),
+                Effect::PickEquipment(id) => {
+                    self.ctx.picks.equipment = Some(id);
+                    self.refresh_views();
+                }
+                Effect::PickProduct(p) => {
+                    self.ctx.picks.product = Some(p);
+                    self.refresh_views();
+                }
                 Effect::Journal(d) => {
                     self.journal(d);
                 }

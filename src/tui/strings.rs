@@ -26,6 +26,7 @@ pub mod views {
     pub const CURVE: &str = "Flow curve";
     pub const JOURNAL: &str = "Journal";
     pub const RESTART: &str = "Restart";
+    pub const LINE: &str = "Line";
 }
 
 /// One line per view: what to watch out for before acting on what it shows.
@@ -40,6 +41,8 @@ pub mod caution {
         "Only records marked saved are on disk; hand the journal file over at shift end.";
     pub const RESTART: &str =
         "Never raise a relief setting to force a restart; isolate and lock out first.";
+    pub const LINE: &str =
+        "Never exceed the rated pressure of the weakest part; lock out before opening.";
 }
 
 /// Labels of the key map (footer and help).
@@ -257,6 +260,34 @@ pub mod restart {
     pub const STUCK: &str = "will not restart";
     pub const DO_NOT_FORCE: &str = "do not force it";
     pub const FORM_NAME: &str = "The restart readings form";
+}
+
+/// Line view.
+pub mod line {
+    pub const CHART_TITLE: &str = " Pressure drop vs flow ";
+    pub const PANEL_TITLE: &str = " Line answer ";
+    pub const NO_LINE: &str = "No line in the site config.";
+    pub const NEED_PRODUCT: &str = "No product picked: pick a line and a product on the Site view.";
+    pub const KEY_COOLER: &str = "5 K cooler";
+    pub const KEY_THICKER: &str = "10 % thicker";
+    pub const KEY_RESET: &str = "as measured";
+    pub const WHAT_IF: &str = "What if";
+    pub const COOLER: &str = "cooler";
+    pub const THICKER: &str = "thicker";
+    pub const AS_MEASURED: &str = "as measured (c: cooler, t: thicker)";
+    pub const AT: &str = "at";
+    pub const AT_TOP: &str = "At";
+    pub const REGIMES: &str = "Regime";
+    pub const UP_TO: &str = "to";
+    pub const NO_PAIRS: &str =
+        "No plant readings yet: flow and pressure-drop spot readings on this line show here.";
+    pub const PLANT: &str = "Plant";
+    pub const LEGEND_CURVE: &str = "curve";
+    pub const LEGEND_BAND: &str = "band";
+    pub const LEGEND_PLANT: &str = "plant";
+    pub const DESIGN: &str = "design";
+    pub const CAUTIONS: &str = "Cautions";
+    pub const SOURCE: &str = "Curve";
 }
 
 /// Journal view.

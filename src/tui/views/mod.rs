@@ -3,6 +3,7 @@
 //! list below. Helper files a view splits off are declared as plain modules.
 
 mod curve_panel;
+mod line_draw;
 mod readings_draw;
 mod readings_form;
 mod restart_draw;
@@ -96,6 +97,7 @@ views! {
     site::SiteView,
     readings::ReadingsView,
     curve::CurveView,
+    line::LineView,
     restart::RestartView,
     journal::JournalView,
 }
