@@ -37,6 +37,8 @@ mod trend;
 mod trend_sets;
 mod tui_e2e;
 mod tui_keys;
+mod tui_line;
 mod tui_render;
+mod tui_restart;
 mod units;
 mod units_plant;

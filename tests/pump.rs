@@ -1,14 +1,15 @@
-//! The pump engine and the laminar system curve: ANSI/HI 9.6.7 factors derived by hand (no
+//! The pump engine and the line it works against: ANSI/HI 9.6.7 factors derived by hand (no
 //! worked example of the standard is known here for certain), the duty point against a
-//! hand-worked intersection, the affinity laws, positive-displacement delivery, and the
-//! laminar line loss against Hagen–Poiseuille and the power-law closed form.
+//! hand-worked intersection, the affinity laws, positive-displacement delivery, and the duty
+//! pressure (the line module's, every regime) against Hagen–Poiseuille, Blasius and the plug
+//! force balance.
 
 use rheoside::pump::{
     DisplacementPump, NoDuty, PumpCurve, PumpPoint, Relief, SlipBasis, SystemCurve, correction,
     hi967, operating_point, pd_duty, volumetric_efficiency,
 };
 use rheoside::rheology::Model;
-use rheoside::session::system_curve::{laminar_flow, wall_stress};
+use rheoside::session::line::duty_pressure;
 
 fn rel(a: f64, b: f64) -> f64 {
     (a - b).abs() / b.abs().max(1e-300)
@@ -150,24 +151,59 @@ fn displacement_pump_delivers_and_meets_its_relief() {
     assert!(thick > thin, "slip falls as the product thickens");
 }
 
-// Source: Hagen–Poiseuille, Q = πR⁴ΔP/(8μL), i.e. τw = 4μQ/(πR³) for a Newtonian liquid; and
-// the power-law closed form Q = πnR³/(3n+1)·(τw/K)^(1/n) (Steffe 1996, eq 2.119 family).
+/// The demo site's paste line L-2: 62.7 mm bore, 32 m + 6 m of fittings, 2 m rise, 0.2 bar
+/// held at the outlet.
+fn paste_line() -> rheoside::site::Line {
+    let site = rheoside::site::demo().expect("the demo site");
+    site.line("L-2").expect("L-2 on the demo site").clone()
+}
+
+// Source: Hagen–Poiseuille, ΔP = 128·μ·L·Q/(π·D⁴) for laminar Newtonian flow, plus the
+// static head ρ·g·Δz and the back-pressure held at the outlet (worked here).
 #[test]
-fn laminar_system_curve_matches_the_closed_forms() {
-    let (d, q) = (0.05, 2e-3);
-    let r: f64 = d / 2.0;
-    let newt = Model::Newtonian { mu: 0.5 };
-    let tw = wall_stress(d, &newt, q);
-    assert!(
-        rel(tw, 4.0 * 0.5 * q / (std::f64::consts::PI * r.powi(3))) < 1e-6,
-        "{tw}"
-    );
-    let (k, n) = (12.0, 0.35);
-    let pl = Model::PowerLaw { k, n };
-    let tw = 40.0;
-    let closed = std::f64::consts::PI * n * r.powi(3) / (3.0 * n + 1.0) * (tw / k).powf(1.0 / n);
-    assert!(rel(laminar_flow(d, &pl, tw), closed) < 1e-5);
-    // A yield stress the wall does not exceed moves nothing.
-    let hb = Model::HerschelBulkley { tau0: 50.0, k, n };
-    assert_eq!(laminar_flow(d, &hb, 45.0), 0.0);
+fn the_duty_pressure_is_hagen_poiseuille_in_laminar_flow() {
+    let line = paste_line();
+    let (mu, rho, q) = (2.0, 1200.0, 2e-3);
+    let (p, regime) = duty_pressure(&line, &Model::Newtonian { mu }, rho, q);
+    let l = 38.0;
+    let d: f64 = 0.0627;
+    let friction = 128.0 * mu * l * q / (std::f64::consts::PI * d.powi(4));
+    let want = friction + rho * 9.80665 * 2.0 + 20_000.0;
+    assert!(rel(p, want) < 1e-4, "{p} vs {want}");
+    assert_eq!(regime, Some(rheoside::line::Regime::Laminar));
+}
+
+// Source: Blasius' smooth-pipe friction factor, f_Fanning = 0.0791·Re^(−1/4) for
+// 4000 < Re < 10⁵ (Darby, *Chemical Engineering Fluid Mechanics*, from memory); the line's
+// 0.0015 mm drawn-stainless roughness is hydraulically smooth here, so Colebrook should agree
+// within a few per cent.
+#[test]
+fn the_duty_pressure_handles_turbulent_flow_that_the_stand_in_could_not() {
+    let line = paste_line();
+    let (mu, rho, q) = (1e-3, 1000.0, 4e-3);
+    let (p, regime) = duty_pressure(&line, &Model::Newtonian { mu }, rho, q);
+    assert_eq!(regime, Some(rheoside::line::Regime::Turbulent));
+    let d: f64 = 0.0627;
+    let v = q / (std::f64::consts::PI * d * d / 4.0);
+    let re = rho * v * d / mu;
+    assert!((4000.0..1e5).contains(&re), "{re}");
+    let f = 0.0791 * re.powf(-0.25);
+    let friction = 2.0 * f * rho * v * v * 38.0 / d;
+    let want = friction + rho * 9.80665 * 2.0 + 20_000.0;
+    assert!(rel(p, want) < 0.05, "{p} vs {want} (Re {re})");
+}
+
+// Source: the force balance on a plug that has not yet moved, ΔP = 4·τ0·L/D (worked here).
+#[test]
+fn at_no_flow_a_yield_stress_product_needs_its_plug_broken() {
+    let line = paste_line();
+    let hb = Model::HerschelBulkley {
+        tau0: 160.0,
+        k: 45.0,
+        n: 0.33,
+    };
+    let (p, regime) = duty_pressure(&line, &hb, 1480.0, 0.0);
+    let want = 4.0 * 160.0 * 38.0 / 0.0627 + 1480.0 * 9.80665 * 2.0 + 20_000.0;
+    assert!(rel(p, want) < 1e-9, "{p} vs {want}");
+    assert_eq!(regime, None);
 }

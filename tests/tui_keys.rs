@@ -180,7 +180,7 @@ fn every_overlay_closes_without_esc() {
 fn tab_and_shift_tab_walk_the_views() {
     let mut a = app();
     let mut seen = vec![a.active_id()];
-    for _ in 0..4 {
+    for _ in 0..a.views().len() {
         press(&mut a, KeyCode::Tab);
         seen.push(a.active_id());
     }
@@ -190,6 +190,8 @@ fn tab_and_shift_tab_walk_the_views() {
             views::site::ID,
             views::readings::ID,
             views::curve::ID,
+            views::line::ID,
+            views::restart::ID,
             views::journal::ID,
             views::site::ID
         ]

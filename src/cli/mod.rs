@@ -21,7 +21,6 @@ mod pump_output;
 mod record;
 mod report;
 mod restart;
-mod restart_json;
 pub mod rheology_args;
 mod trend;
 

@@ -2,8 +2,8 @@
 
 use super::args::Cli;
 use super::gel_csv;
-use super::restart_json;
 use crate::line::restart::{GelFit, GelFitOptions, PlugLine, fit_gel};
+use crate::present::restart_json;
 use crate::session::duration::parse_duration;
 use crate::session::restart::{self, GelSource, LimitSource, RestartInput};
 use crate::session::restart_words;

@@ -62,17 +62,47 @@ pub fn site_case(
             },
         });
     };
-    let pipe = Pipe {
+    let mut case = pipe_case(pipe_of(l), source, density)?;
+    case.line_id = Some(l.id.clone());
+    case.design_pressure_pa = Some(l.design_pressure_pa);
+    Ok(case)
+}
+
+/// A site line as the engine's pipe.
+pub fn pipe_of(l: &crate::site::Line) -> Pipe {
+    Pipe {
         inner_diameter_m: l.inner_diameter_m,
         length_m: l.length_m,
         fittings_length_m: l.fittings_length_m,
         roughness_m: l.roughness_m,
         elevation_change_m: l.elevation_change_m,
+    }
+}
+
+/// What a pump must give at a flow on a site line (gauge, Pa) and the regime there: friction
+/// and static head by the line module in every regime (the middle of the band when
+/// transitional), plus the back-pressure held at the outlet. At no flow a yield-stress
+/// product still needs its plug broken, 4·τ0·L/D (the force balance on the plug).
+pub fn duty_pressure(
+    l: &crate::site::Line,
+    model: &crate::rheology::Model,
+    density_kg_m3: f64,
+    flow_m3_s: f64,
+) -> (f64, Option<line::Regime>) {
+    let pipe = pipe_of(l);
+    let fluid = Fluid {
+        model: *model,
+        density_kg_m3,
     };
-    let mut case = pipe_case(pipe, source, density)?;
-    case.line_id = Some(l.id.clone());
-    case.design_pressure_pa = Some(l.design_pressure_pa);
-    Ok(case)
+    let fixed = density_kg_m3 * crate::pump::G * l.elevation_change_m + l.back_pressure_pa;
+    if flow_m3_s <= 0.0 {
+        let plug = 4.0 * model.yield_stress() * l.total_length_m() / l.inner_diameter_m;
+        return (plug + fixed, None);
+    }
+    match line::pressure_drop(&pipe, &fluid, flow_m3_s) {
+        Ok(a) => (a.pressure_drop_pa + l.back_pressure_pa, Some(a.regime)),
+        Err(_) => (f64::NAN, None),
+    }
 }
 
 /// The case for a pipe typed in; the density is the given one, else the product's.

@@ -26,7 +26,6 @@ pub mod restart_words;
 pub mod rheology_shift;
 pub mod rheology_source;
 pub mod state;
-pub mod system_curve;
 pub mod tank;
 pub mod tank_input;
 pub mod tank_json;

@@ -21,14 +21,18 @@ pub const WATER_DENSITY: f64 = 1000.0;
 pub enum PumpNote {
     NoCorrectionNeeded,
     Hi(HiWarning),
-    NonNewtonianNotStandardized { shear_rate_per_s: f64 },
+    NonNewtonianNotStandardized {
+        shear_rate_per_s: f64,
+    },
     DensityAssumedWater,
     ShearThickening,
-    PressureRisesFasterThanSpeed { exponent: f64 },
+    PressureRisesFasterThanSpeed {
+        exponent: f64,
+    },
     ReliefOpens,
     MotorOverloaded,
     SlipEstimated,
-    LaminarSystemCurveOnly,
+    /// The duty point is transitional or turbulent (the line module handles every regime).
     NotLaminar,
     NoDuty(NoDuty),
     MechanicalLossesIgnored,

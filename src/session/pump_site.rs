@@ -2,8 +2,9 @@
 //! the duty point (centrifugal), or the delivered flow against the relief (positive
 //! displacement).
 
+use super::line::duty_pressure;
 use super::pump::{BepAnswer, PumpNote, at_bep};
-use super::system_curve::{Regime, line_pressure_pa, regime};
+use crate::line::Regime;
 use crate::pump::{
     DisplacementPump, Duty, G, PdDuty, PumpCurve, PumpPoint, Relief, SlipBasis, SystemCurve,
     operating_point, pd_duty,
@@ -108,7 +109,7 @@ pub fn on_site(q: &SitePump) -> Result<SitePumpAnswer, PumpSetupError> {
         })?;
     let rho = product.density_kg_m3;
     let mu = q.model.apparent_viscosity(q.shear_rate_per_s);
-    let mut notes = vec![PumpNote::LaminarSystemCurveOnly];
+    let mut notes = Vec::new();
     let non_newtonian = !matches!(q.model, Model::Newtonian { .. });
     if non_newtonian && matches!(pump.kind, PumpKind::Centrifugal { .. }) {
         notes.push(PumpNote::NonNewtonianNotStandardized {
@@ -182,7 +183,7 @@ fn centrifugal(
     let bep = at_bep(nu_cst, water.bep(), rpm, Some(rho));
     notes.extend(bep.notes.iter().copied());
     let curve = water.corrected(&bep.correction);
-    let system = |flow: f64| line_pressure_pa(line, &q.model, rho, flow) / (rho * G);
+    let system = |flow: f64| duty_pressure(line, &q.model, rho, flow).0 / (rho * G);
     let duty = operating_point(
         &curve,
         &SystemCurve::Function(&system),
@@ -190,8 +191,8 @@ fn centrifugal(
         pump.motor_rating_w,
     );
     let duty = duty.map_err(|why| notes.push(PumpNote::NoDuty(why))).ok();
-    let regime = duty.map(|d| regime(line, &q.model, rho, d.flow_m3_s));
-    if regime == Some(Regime::NotLaminar) {
+    let regime = duty.and_then(|d| duty_pressure(line, &q.model, rho, d.flow_m3_s).1);
+    if regime.is_some_and(|r| r != Regime::Laminar) {
         notes.push(PumpNote::NotLaminar);
     }
     if duty.is_some_and(|d| d.motor_margin_w.is_some_and(|m| m < 0.0)) {
@@ -222,7 +223,7 @@ fn displacement(
     mu: f64,
     notes: &mut Vec<PumpNote>,
 ) -> DisplacementAnswer {
-    let system = |flow: f64| line_pressure_pa(line, &q.model, rho, flow);
+    let system = |flow: f64| duty_pressure(line, &q.model, rho, flow).0;
     let duty = pd_duty(pd, &system, mu);
     if duty.basis != SlipBasis::Measured {
         notes.push(PumpNote::SlipEstimated);
@@ -239,8 +240,10 @@ fn displacement(
         notes.push(PumpNote::MotorOverloaded);
     }
     notes.push(PumpNote::MechanicalLossesIgnored);
-    let regime = regime(line, &q.model, rho, duty.flow_m3_s);
-    if regime == Regime::NotLaminar {
+    let regime = duty_pressure(line, &q.model, rho, duty.flow_m3_s)
+        .1
+        .unwrap_or(Regime::Laminar);
+    if regime != Regime::Laminar {
         notes.push(PumpNote::NotLaminar);
     }
     DisplacementAnswer {

@@ -43,6 +43,12 @@ pub enum Origin {
     },
     /// The nominal constants of the product in the site config.
     SiteNominal { product: String },
+    /// The product's latest fitted set in the live session (the screens).
+    Session {
+        seq: u64,
+        viscometer: String,
+        recorded_utc: DateTime<Utc>,
+    },
 }
 
 /// The curve to use, with where it came from and at what temperature.
@@ -84,6 +90,9 @@ impl Resolved {
             Origin::SiteNominal { product } => {
                 format!("the site's nominal constants for {product}")
             }
+            Origin::Session {
+                seq, viscometer, ..
+            } => format!("this session's set #{seq} (viscometer {viscometer})"),
         };
         let shift = self.shift.words(
             self.shifted_parameter,
@@ -166,10 +175,65 @@ fn list<'a>(names: impl Iterator<Item = &'a str>) -> String {
 
 type Found = (Model, Option<Fit>, Origin, Option<f64>);
 
+/// The product's latest fitted curve in a live session (the screens' state), else the
+/// site's nominal constants for it, brought to `temperature_k`.
+pub fn resolve_live(
+    site: &Site,
+    state: &SessionState,
+    product: &str,
+    temperature_k: Option<f64>,
+) -> Result<Resolved, SourceError> {
+    let p = find_product(site, product)?.clone();
+    let found = match latest_fitted(state, Some(product), Path::new("")) {
+        Ok((
+            m,
+            fit,
+            Origin::Journal {
+                seq,
+                viscometer,
+                recorded_utc,
+                ..
+            },
+            at,
+        )) => (
+            m,
+            fit,
+            Origin::Session {
+                seq,
+                viscometer,
+                recorded_utc,
+            },
+            at,
+        ),
+        _ => from_site(Some(&p))?,
+    };
+    let (measured, fit, origin, measured_at_k) = found;
+    let shift = shift_for(Some(&p), measured_at_k, temperature_k);
+    Ok(Resolved {
+        model: scale_viscosity(measured, shift.factor()),
+        measured,
+        fit,
+        origin,
+        product: Some(p),
+        measured_at_k,
+        applies_at_k: temperature_k,
+        shift,
+        shifted_parameter: viscosity_parameter(measured.kind()),
+    })
+}
+
 /// The product's latest set whose curve fitted (any product's when none is named).
 fn from_journal(site: &Site, path: &Path, product: Option<&str>) -> Result<Found, SourceError> {
     let loaded = crate::journal::load(path)?;
     let state = SessionState::replay(site, &loaded.records);
+    latest_fitted(&state, product, path)
+}
+
+fn latest_fitted(
+    state: &SessionState,
+    product: Option<&str>,
+    path: &Path,
+) -> Result<Found, SourceError> {
     let set = state
         .sets
         .iter()

@@ -137,6 +137,13 @@ impl App {
             let pick_before = self.pick_of_choice(record);
             self.ctx.session.apply(&self.ctx.site, record);
             self.answer(record, pick_before);
+            let ctx = &self.ctx;
+            let effects: Vec<Effect> = self
+                .views
+                .iter_mut()
+                .flat_map(|v| v.answer(record, ctx))
+                .collect();
+            self.apply(effects);
         }
         if !reply.records.is_empty() {
             self.refresh_views();
@@ -344,8 +351,14 @@ impl App {
         for effect in effects {
             match effect {
                 Effect::Status(s) => self.status = s,
-                Effect::PickEquipment(id) => self.ctx.picks.equipment = Some(id),
-                Effect::PickProduct(p) => self.ctx.picks.product = Some(p),
+                Effect::PickEquipment(id) => {
+                    self.ctx.picks.equipment = Some(id);
+                    self.refresh_views();
+                }
+                Effect::PickProduct(p) => {
+                    self.ctx.picks.product = Some(p);
+                    self.refresh_views();
+                }
                 Effect::Journal(d) => {
                     self.journal(d);
                 }

@@ -57,6 +57,9 @@ pub enum Scope {
     Moving,
     /// The active view's own bindings (its `keys()` table).
     View,
+    /// The active view's own bindings that apply at its top level and also while one of its
+    /// fields is being typed into (its `keys()` table too): Ctrl-S to save a form.
+    ViewTyping,
     /// While a field is being typed into (including the note box).
     Editing,
     /// The note box, before the editing keys.
@@ -80,8 +83,14 @@ impl Context {
     /// Scopes to search, most specific first.
     pub fn scopes(self) -> Vec<Scope> {
         match self {
-            Context::Top(_) => vec![Scope::View, Scope::Moving, Scope::Global, Scope::Always],
-            Context::Editing => vec![Scope::Editing, Scope::Always],
+            Context::Top(_) => vec![
+                Scope::View,
+                Scope::ViewTyping,
+                Scope::Moving,
+                Scope::Global,
+                Scope::Always,
+            ],
+            Context::Editing => vec![Scope::ViewTyping, Scope::Editing, Scope::Always],
             Context::Note => vec![Scope::NoteBox, Scope::Editing, Scope::Always],
             Context::Help => vec![Scope::Help, Scope::Always],
             Context::ConfirmQuit => vec![Scope::ConfirmQuit, Scope::Always],
@@ -244,7 +253,7 @@ pub fn bindings_for(ctx: Context, view_keys: &'static [Binding]) -> Vec<&'static
 
 /// Where a scope's bindings are listed: the view's own table, or the shared one.
 fn table(scope: Scope, view_keys: &'static [Binding]) -> impl Iterator<Item = &'static Binding> {
-    let rows = if scope == Scope::View {
+    let rows = if matches!(scope, Scope::View | Scope::ViewTyping) {
         view_keys
     } else {
         BINDINGS

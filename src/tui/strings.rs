@@ -25,6 +25,8 @@ pub mod views {
     pub const READINGS: &str = "Readings";
     pub const CURVE: &str = "Flow curve";
     pub const JOURNAL: &str = "Journal";
+    pub const RESTART: &str = "Restart";
+    pub const LINE: &str = "Line";
 }
 
 /// One line per view: what to watch out for before acting on what it shows.
@@ -37,6 +39,10 @@ pub mod caution {
         "Check the fit against the points before acting on it; advice, not a certificate.";
     pub const JOURNAL: &str =
         "Only records marked saved are on disk; hand the journal file over at shift end.";
+    pub const RESTART: &str =
+        "Never raise a relief setting to force a restart; isolate and lock out first.";
+    pub const LINE: &str =
+        "Never exceed the rated pressure of the weakest part; lock out before opening.";
 }
 
 /// Labels of the key map (footer and help).
@@ -84,6 +90,8 @@ pub mod keys {
     pub const CANCEL_NOTE: &str = "cancel";
     pub const YES_QUIT: &str = "yes, quit";
     pub const NO_STAY: &str = "no, stay";
+    pub const SAVE_FORM: &str = "save";
+    pub const SAVE_OR_NEXT: &str = "save (on Save) / next";
 }
 
 /// The help overlay.
@@ -199,6 +207,87 @@ pub mod curve {
     pub const RATE_INVALID: &str = "shear rate";
     pub const PM_IS_95: &str = "(± is the 95 % interval)";
     pub const AT: &str = "at";
+}
+
+/// Restart view.
+pub mod restart {
+    pub const FORM_TITLE: &str = " Gel readings ";
+    pub const LINE: &str = "Line";
+    pub const PUMP: &str = "Pump";
+    pub const PRODUCT: &str = "Product";
+    pub const NO_LINE: &str = "no line in the site config";
+    pub const NO_PUMP: &str = "no pump feeds it";
+    pub const NOT_PICKED: &str = "not picked (Site view)";
+    pub const REST: &str = "rest time";
+    pub const GEL: &str = "gel stress";
+    pub const STOPPED: &str = "Stopped";
+    pub const LONG_REST: &str = "blank: long rest";
+    pub const SAVE: &str = "[ Save readings ]";
+    pub const HINT: &str = "Type rest time and gel stress (10 s, 10 min, 30 min; Pa unless a \
+         unit is typed). Enter or Tab: next; Ctrl-S saves; Esc leaves the fields.";
+    pub const CHART_TITLE: &str = " Gel stress vs rest ";
+    pub const ANSWER_TITLE: &str = " Will it restart? ";
+    pub const SCROLL: &str = "PgUp/PgDn";
+    pub const NO_ANSWER: &str = "No answer yet: enter three or more rested-gel readings on \
+         the left and save them; the answer is worked out from what the journal holds.";
+    pub const WAITING: &str = "Readings sent; the answer follows once the journal has them.";
+    pub const LEGEND_READ: &str = "read";
+    pub const LEGEND_FIT: &str = "fit";
+    pub const LEGEND_BAND: &str = "95 %";
+    pub const LIMIT: &str = "pump limit";
+    pub const ALLOWED: &str = "less margin";
+    pub const NOW: &str = "Now";
+    pub const COLDEST: &str = "coldest";
+    pub const AT: &str = "At";
+    pub const NEXT: &str = "What to do next";
+    pub const ASSUMED: &str = "What was assumed";
+    pub const CAUTIONS: &str = "Cautions";
+    pub const NEED_PRODUCT: &str = "No product picked: pick one on the Site view first.";
+    pub const NEED_PUMP: &str = "No pump feeds this line in the site config: nothing to judge.";
+    pub const NEED_READINGS: &str =
+        "Type at least two rested-gel readings (rest time and gel stress), three or more to fit.";
+    pub const BOTH_NEEDED: &str = "needs both a rest time and a gel stress";
+    pub const NEGATIVE: &str = "cannot be negative";
+    pub const ROW: &str = "row";
+    pub const CANNOT_ANSWER: &str = "Not saved";
+    pub const SENT: &str = "Gel readings sent to the journal; the answer follows once saved.";
+    pub const ANSWER_FOR: &str = "Answer for";
+    pub const JOURNALLED: &str = "journalled";
+    pub const AT_COLDEST: &str = "coldest";
+    pub const AFTER_STOP: &str = "After a stop of";
+    pub const AFTER_LONG_REST: &str = "After a long rest (the gel fully built; no stop typed):";
+    pub const RESTARTS: &str = "will restart";
+    pub const STUCK: &str = "will not restart";
+    pub const DO_NOT_FORCE: &str = "do not force it";
+    pub const FORM_NAME: &str = "The restart readings form";
+}
+
+/// Line view.
+pub mod line {
+    pub const CHART_TITLE: &str = " Pressure drop vs flow ";
+    pub const PANEL_TITLE: &str = " Line answer ";
+    pub const NO_LINE: &str = "No line in the site config.";
+    pub const NEED_PRODUCT: &str = "No product picked: pick a line and a product on the Site view.";
+    pub const KEY_COOLER: &str = "5 K cooler";
+    pub const KEY_THICKER: &str = "10 % thicker";
+    pub const KEY_RESET: &str = "as measured";
+    pub const WHAT_IF: &str = "What if";
+    pub const COOLER: &str = "cooler";
+    pub const THICKER: &str = "thicker";
+    pub const AS_MEASURED: &str = "as measured (c: cooler, t: thicker)";
+    pub const AT: &str = "at";
+    pub const AT_TOP: &str = "At";
+    pub const REGIMES: &str = "Regime";
+    pub const UP_TO: &str = "to";
+    pub const NO_PAIRS: &str =
+        "No plant readings yet: flow and pressure-drop spot readings on this line show here.";
+    pub const PLANT: &str = "Plant";
+    pub const LEGEND_CURVE: &str = "curve";
+    pub const LEGEND_BAND: &str = "band";
+    pub const LEGEND_PLANT: &str = "plant";
+    pub const DESIGN: &str = "design";
+    pub const CAUTIONS: &str = "Cautions";
+    pub const SOURCE: &str = "Curve";
 }
 
 /// Journal view.

@@ -3,12 +3,15 @@
 //! list below. Helper files a view splits off are declared as plain modules.
 
 mod curve_panel;
+mod line_draw;
 mod readings_draw;
 mod readings_form;
+mod restart_draw;
+pub mod restart_form;
 
 use super::ctx::Ctx;
 use super::keymap::{Action, Binding};
-use crate::journal::Payload;
+use crate::journal::{Payload, Record};
 use ratatui::Frame;
 use ratatui::layout::Rect;
 
@@ -57,6 +60,12 @@ pub trait View {
     /// to date here, so drawing stays free of computation.
     fn refresh(&mut self, _ctx: &Ctx) {}
 
+    /// A record the journal numbered was just applied to the state: a view that sent it may
+    /// answer (a result linked to it, as the app does for a viscometer set).
+    fn answer(&mut self, _record: &Record, _ctx: &Ctx) -> Vec<Effect> {
+        Vec::new()
+    }
+
     /// Draw from state only: no I/O, no fitting.
     fn render(&self, frame: &mut Frame, area: Rect, ctx: &Ctx);
 
@@ -88,5 +97,7 @@ views! {
     site::SiteView,
     readings::ReadingsView,
     curve::CurveView,
+    line::LineView,
+    restart::RestartView,
     journal::JournalView,
 }

@@ -1,4 +1,5 @@
-//! `rheoside restart --json`: the contract keys (SI) plus the cold case, the gel fit and the
+//! The restart answer as JSON (`rheoside restart --json` and the result the Restart view
+//! journals): the contract keys (SI) plus the cold case, the gel fit and the
 //! notes in words; and the one-line gel summary for the table output.
 
 use crate::line::restart::{GelFit, IntervalBasis, MaxStop};
