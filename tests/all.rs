@@ -23,6 +23,7 @@ mod mixing_props;
 mod mixing_refs;
 mod pump;
 mod report;
+mod report_findings;
 mod restart;
 mod rheology;
 mod rheology_choice;

@@ -13,7 +13,7 @@ mod rules;
 
 pub use facts::*;
 pub use finding::{Caution, Finding, Measured, Number, Severity, Sure};
-pub use rank::rank;
+pub use rank::{order, rank};
 
 /// Every rule, in the order used to break ties in the ranking.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Hash)]

@@ -3,16 +3,21 @@
 //! key is a total order, so the same facts in any order give the same list.
 
 use super::Finding;
+use std::cmp::Ordering;
 
+/// Sort into the ranking order (stable: findings equal on every key keep their order).
 pub fn rank(findings: &mut [Finding]) {
-    findings.sort_by(|a, b| {
-        a.severity
-            .cmp(&b.severity)
-            .then(a.sure.cmp(&b.sure))
-            .then(a.rule.cmp(&b.rule))
-            .then_with(|| a.subject.cmp(&b.subject))
-            .then_with(|| a.title.cmp(&b.title))
-    });
+    findings.sort_by(order);
+}
+
+/// The ranking order of two findings.
+pub fn order(a: &Finding, b: &Finding) -> Ordering {
+    a.severity
+        .cmp(&b.severity)
+        .then(a.sure.cmp(&b.sure))
+        .then(a.rule.cmp(&b.rule))
+        .then_with(|| a.subject.cmp(&b.subject))
+        .then_with(|| a.title.cmp(&b.title))
 }
 
 #[cfg(test)]

@@ -9,6 +9,7 @@ mod csv;
 mod json;
 mod md;
 mod md_set;
+mod ranked;
 mod runs;
 mod seen;
 
