@@ -67,13 +67,7 @@ fn flow_index(state: &SessionState) -> Option<Measured> {
 /// A restart judged for every line the session names, with its first pump and the newest
 /// product set in the session that has a gel build-up on the site.
 pub fn restarts(state: &SessionState, site: &Site) -> Vec<RestartFacts> {
-    let Some(product) = state
-        .sets
-        .iter()
-        .rev()
-        .map(|e| e.item.product.as_str())
-        .find(|p| site.product(p).is_some_and(|p| p.gel.is_some()))
-    else {
+    let Some((product, assumed)) = restart_product(state, site) else {
         return Vec::new();
     };
     let mut out = Vec::new();
@@ -86,6 +80,10 @@ pub fn restarts(state: &SessionState, site: &Site) -> Vec<RestartFacts> {
             continue;
         }
         let stop = latest(state, "rest-time", &at);
+        if assumed && stop.is_none() {
+            // No set names the product and no stop was recorded here: nothing to judge.
+            continue;
+        }
         let Ok(input) = from_site(
             site,
             (&line.id, &pump.id, product),
@@ -97,7 +95,13 @@ pub fn restarts(state: &SessionState, site: &Site) -> Vec<RestartFacts> {
         let Ok(answer) = analyse(input) else {
             continue;
         };
-        let subject = format!("line {} with pump {}", line.id, pump.id);
+        let subject = match assumed {
+            false => format!("line {} with pump {}, {product}", line.id, pump.id),
+            true => format!(
+                "line {} with pump {}, {product} assumed (the only product with a gel build-up)",
+                line.id, pump.id
+            ),
+        };
         let margin = answer.input.margin;
         out.push(restart_facts(&subject, &answer.now, margin, stop, "now"));
         if let Some(cold) = &answer.cold {
@@ -106,6 +110,25 @@ pub fn restarts(state: &SessionState, site: &Site) -> Vec<RestartFacts> {
         }
     }
     out
+}
+
+/// The product judged for a restart: the newest set's product with a gel build-up on the
+/// site; with none in the session, the site's only product with one (said as assumed).
+fn restart_product<'s>(state: &'s SessionState, site: &'s Site) -> Option<(&'s str, bool)> {
+    let from_sets = state
+        .sets
+        .iter()
+        .rev()
+        .map(|e| e.item.product.as_str())
+        .find(|p| site.product(p).is_some_and(|p| p.gel.is_some()));
+    if let Some(p) = from_sets {
+        return Some((p, false));
+    }
+    let mut gelling = site.products.iter().filter(|p| p.gel.is_some());
+    match (gelling.next(), gelling.next(), state.sets.is_empty()) {
+        (Some(only), None, true) => Some((only.name.as_str(), true)),
+        _ => None,
+    }
 }
 
 fn restart_facts(
