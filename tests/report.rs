@@ -381,5 +381,5 @@ fn an_unknown_format_is_refused_with_the_accepted_ones() {
     let path = known_journal(dir.path());
     let out = report(&["--format", "xml", path.to_str().unwrap()]);
     assert_eq!(out.status.code(), Some(2));
-    assert!(String::from_utf8_lossy(&out.stderr).contains("md, csv or json"));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("md, csv, json or html"));
 }

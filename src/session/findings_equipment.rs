@@ -3,14 +3,14 @@
 //! out through `session::restart` with the product's gel build-up from the site.
 
 use super::findings::{latest, read, touched};
-use super::restart::{GelSource, RestartCase, analyse, from_site};
+use super::restart::{GelSource, RestartAnswer, RestartCase, analyse, from_site};
 use super::state::SessionState;
 use super::trend::{Param, hb_equivalent};
 use crate::diagnose::{Measured, PumpFacts, PumpType, RestartFacts};
 use crate::rheology::ParamName;
 use crate::site::{Pump, PumpKind, Site};
 
-pub use super::findings_tank::tanks;
+pub use super::findings_tank::{tank_answers, tanks};
 
 /// Facts for every pump the session names (at the pump or at the line it feeds).
 pub fn pumps(state: &SessionState, site: &Site) -> Vec<PumpFacts> {
@@ -67,6 +67,24 @@ fn flow_index(state: &SessionState) -> Option<Measured> {
 /// A restart judged for every line the session names, with its first pump and the newest
 /// product set in the session that has a gel build-up on the site.
 pub fn restarts(state: &SessionState, site: &Site) -> Vec<RestartFacts> {
+    let mut out = Vec::new();
+    for (subject, answer, stop) in restart_answers(state, site) {
+        let margin = answer.input.margin;
+        out.push(restart_facts(&subject, &answer.now, margin, stop, "now"));
+        if let Some(cold) = &answer.cold {
+            let when = "at the line's coldest expected temperature";
+            out.push(restart_facts(&subject, cold, margin, stop, when));
+        }
+    }
+    out
+}
+
+/// The restart answer for every line the session names: (subject, answer, stop recorded).
+/// The report draws its gel chart from these.
+pub fn restart_answers(
+    state: &SessionState,
+    site: &Site,
+) -> Vec<(String, RestartAnswer, Option<f64>)> {
     let Some((product, assumed)) = restart_product(state, site) else {
         return Vec::new();
     };
@@ -102,18 +120,14 @@ pub fn restarts(state: &SessionState, site: &Site) -> Vec<RestartFacts> {
                 line.id, pump.id
             ),
         };
-        let margin = answer.input.margin;
-        out.push(restart_facts(&subject, &answer.now, margin, stop, "now"));
-        if let Some(cold) = &answer.cold {
-            let when = "at the line's coldest expected temperature";
-            out.push(restart_facts(&subject, cold, margin, stop, when));
-        }
+        out.push((subject, answer, stop));
     }
     out
 }
 
 /// The product judged for a restart: the newest set's product with a gel build-up on the
-/// site; with none in the session, the site's only product with one (said as assumed).
+/// site; with none in the session, the site's only product with one (said as assumed, and
+/// judged only where a stop was recorded).
 fn restart_product<'s>(state: &'s SessionState, site: &'s Site) -> Option<(&'s str, bool)> {
     let from_sets = state
         .sets
@@ -125,8 +139,8 @@ fn restart_product<'s>(state: &'s SessionState, site: &'s Site) -> Option<(&'s s
         return Some((p, false));
     }
     let mut gelling = site.products.iter().filter(|p| p.gel.is_some());
-    match (gelling.next(), gelling.next(), state.sets.is_empty()) {
-        (Some(only), None, true) => Some((only.name.as_str(), true)),
+    match (gelling.next(), gelling.next()) {
+        (Some(only), None) => Some((only.name.as_str(), true)),
         _ => None,
     }
 }

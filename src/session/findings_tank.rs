@@ -5,7 +5,7 @@
 use super::findings::{latest_curve, read, touched};
 use super::rheology_source::nominal_model;
 use super::state::SessionState;
-use super::tank::analyse;
+use super::tank::{TankAnswer, analyse};
 use super::tank_input::{TankFlags, request, site_tank};
 use super::tank_readings::TankReadings;
 use crate::diagnose::{Measured, PlantFacts, PlantSignal, TankFacts};
@@ -42,11 +42,16 @@ fn full_load_current_a(t: &Tank) -> Option<f64> {
     (i.is_finite() && i > 0.0).then_some(i)
 }
 
-fn tank_facts(
-    state: &SessionState,
-    site: &Site,
-    t: &Tank,
-) -> Option<(TankFacts, Option<PlantFacts>)> {
+/// The tank answer for every tank the session names; the report draws its power curve.
+pub fn tank_answers<'s>(state: &SessionState, site: &'s Site) -> Vec<(&'s Tank, TankAnswer)> {
+    site.tanks
+        .iter()
+        .filter(|t| touched(state, &[t.id.as_str()]))
+        .filter_map(|t| Some((t, tank_answer(state, site, t)?)))
+        .collect()
+}
+
+fn tank_answer(state: &SessionState, site: &Site, t: &Tank) -> Option<TankAnswer> {
     let readings = TankReadings::latest(&state.readings, &t.id);
     let on_site = site_tank(site, &t.id, None).ok()?;
     let model = match latest_curve(state, &t.product) {
@@ -54,7 +59,16 @@ fn tank_facts(
         None => nominal_model(site.product(&t.product)?.nominal?),
     };
     let req = request(Some(on_site), &readings, &TankFlags::default(), model).ok()?;
-    let answer = analyse(&req).ok()?;
+    analyse(&req).ok()
+}
+
+fn tank_facts(
+    state: &SessionState,
+    site: &Site,
+    t: &Tank,
+) -> Option<(TankFacts, Option<PlantFacts>)> {
+    let readings = TankReadings::latest(&state.readings, &t.id);
+    let answer = tank_answer(state, site, t)?;
     let subject = format!("tank {}", t.id);
     let op = &answer.operating;
     let facts = TankFacts {

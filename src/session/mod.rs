@@ -10,7 +10,7 @@ pub mod checks;
 mod curve_checks;
 pub mod duration;
 pub mod findings;
-mod findings_equipment;
+pub mod findings_equipment;
 mod findings_line;
 mod findings_tank;
 pub mod flow_curve;
