@@ -33,3 +33,5 @@ pub mod text;
 pub mod readings;
 
 pub mod pump;
+
+pub mod diagnose;

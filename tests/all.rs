@@ -24,6 +24,8 @@ mod mixing_props;
 mod mixing_refs;
 mod pump;
 mod report;
+mod report_findings;
+mod report_html;
 mod restart;
 mod rheology;
 mod rheology_choice;

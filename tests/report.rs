@@ -133,7 +133,7 @@ fn markdown_has_every_section_and_the_cautions() {
         "### Viscometer sets and flow curves (1)",
         "### Results (1)",
         "### Notes (1)",
-        "### Findings (1)",
+        "### Findings noted by the operator (1)",
         "## Cautions",
     ] {
         assert!(md.contains(section), "missing {section:?} in\n{md}");
@@ -189,13 +189,14 @@ fn csv_has_the_header_and_one_row_per_reading_and_dial_row() {
     let lines: Vec<&str> = text.lines().collect();
     assert_eq!(
         lines[0],
-        "session,seq,utc,local_time,operator,equipment,name,raw,value_si,unit,viscometer,product,rpm,row"
+        "session,seq,utc,local_time,operator,equipment,name,raw,value_si,unit,viscometer,product,rpm,row,rule,severity,sure,numbers,next_checks,caution"
     );
-    // 2 spot readings + 4 dial rows.
-    assert_eq!(lines.len(), 1 + 2 + 4, "{text}");
+    // 2 spot readings + 4 dial rows, then one row per ranked finding.
+    let findings = lines.iter().filter(|l| l.contains(",finding,")).count();
+    assert_eq!(lines.len(), 1 + 2 + 4 + findings, "{text}");
     // 6.2 bar = 620 000 Pa (bar = 10^5 Pa, NIST SP 811); 24 °C = 297.15 K.
     assert!(
-        lines[1].ends_with(",P-1,discharge-pressure,6.2 bar,620000,Pa,,,,"),
+        lines[1].ends_with(",P-1,discharge-pressure,6.2 bar,620000,Pa,,,,,,,,,,"),
         "{}",
         lines[1]
     );
@@ -208,12 +209,12 @@ fn csv_has_the_header_and_one_row_per_reading_and_dial_row() {
         lines[2]
     );
     assert!(
-        lines[3].ends_with(",dial,60,60,dial,VIS-A,chalk-slurry,600,1"),
+        lines[3].ends_with(",dial,60,60,dial,VIS-A,chalk-slurry,600,1,,,,,,"),
         "{}",
         lines[3]
     );
     assert!(
-        lines[6].ends_with(",dial,10,10,dial,VIS-A,chalk-slurry,100,4"),
+        lines[6].ends_with(",dial,10,10,dial,VIS-A,chalk-slurry,100,4,,,,,,"),
         "{}",
         lines[6]
     );
@@ -233,6 +234,7 @@ fn json_keeps_its_documented_keys() {
         keys(&v),
         [
             "cautions",
+            "findings",
             "format",
             "format_version",
             "left_out",
@@ -379,5 +381,5 @@ fn an_unknown_format_is_refused_with_the_accepted_ones() {
     let path = known_journal(dir.path());
     let out = report(&["--format", "xml", path.to_str().unwrap()]);
     assert_eq!(out.status.code(), Some(2));
-    assert!(String::from_utf8_lossy(&out.stderr).contains("md, csv or json"));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("md, csv, json or html"));
 }

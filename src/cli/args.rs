@@ -144,7 +144,7 @@ pub struct ReportArgs {
     /// Journal files.
     #[arg(required = true)]
     pub journals: Vec<PathBuf>,
-    /// md, csv or json.
+    /// md, csv, json or html (one self-contained file, printable on A4).
     #[arg(long, default_value = "md")]
     pub format: String,
 }

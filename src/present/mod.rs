@@ -7,6 +7,7 @@
 //! ASCII spelling of every symbol when asked (`--ascii`, `TERM=dumb`). Pure: no terminal,
 //! no disk, no clock.
 
+pub mod findings;
 mod glyph;
 pub mod json;
 pub mod limits;

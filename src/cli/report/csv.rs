@@ -5,13 +5,16 @@
 //! operator, equipment, name, raw, value_si, unit, viscometer, product, rpm, row.
 //! A dial row has name `dial`, raw the dial as typed, value_si the dial value (unit
 //! `dial`, the instrument's own scale), and its speed in `rpm`. A text cell that a
+//! After the readings, one row per ranked finding (most urgent first): name `finding`, raw
+//! its headline, row its rank, and the columns added for findings (rule, severity, sure,
+//! numbers, next_checks, caution), empty on reading rows. A text cell that a
 //! spreadsheet would run as a formula (`=`, `+`, `@`, or `-` before a non-number) gets a
 //! leading `'`.
 
 use super::{Inputs, dimension_of, rfc3339};
 use crate::session::state::{Entry, SessionState};
 
-pub(crate) const HEADER: [&str; 14] = [
+pub(crate) const HEADER: [&str; 20] = [
     "session",
     "seq",
     "utc",
@@ -26,15 +29,29 @@ pub(crate) const HEADER: [&str; 14] = [
     "product",
     "rpm",
     "row",
+    "rule",
+    "severity",
+    "sure",
+    "numbers",
+    "next_checks",
+    "caution",
 ];
+
+/// Cells of the finding columns, empty on a reading row.
+const FINDING_COLUMNS: usize = 6;
 
 pub(crate) fn render(inputs: &Inputs) -> anyhow::Result<Vec<u8>> {
     let mut w = csv::Writer::from_writer(Vec::new());
     w.write_record(HEADER)?;
     for j in &inputs.journals {
-        for row in rows(&j.state) {
+        for mut row in rows(&j.state) {
+            row.extend(std::iter::repeat_n(String::new(), FINDING_COLUMNS));
             w.write_record(&row)?;
         }
+    }
+    let style = crate::present::Style::new(inputs.site.unit_system, false);
+    for (i, r) in super::ranked::ranked(inputs).iter().enumerate() {
+        w.write_record(finding_row(i + 1, r, style))?;
     }
     w.into_inner()
         .map_err(|e| anyhow::anyhow!("cannot write the CSV: {e}"))
@@ -74,6 +91,30 @@ fn rows(s: &SessionState) -> Vec<Vec<String>> {
     // Stable: a set's rows keep their order under the one seq they share.
     out.sort_by_key(|(seq, _)| *seq);
     out.into_iter().map(|(_, row)| row).collect()
+}
+
+/// One ranked finding as a row: session, then the headline as `raw`, its rank as `row`.
+fn finding_row(
+    rank: usize,
+    r: &super::ranked::Ranked,
+    style: crate::present::Style,
+) -> Vec<String> {
+    let f = &r.finding;
+    let w = crate::present::findings::words(f, style);
+    let mut row = vec![clean(&r.session)];
+    row.extend(std::iter::repeat_n(String::new(), 5));
+    row.extend(["finding".to_string(), clean(&w.headline)]);
+    row.extend(std::iter::repeat_n(String::new(), 5));
+    row.push(rank.to_string());
+    row.extend([
+        f.rule.id().to_string(),
+        f.severity.code().to_string(),
+        f.sure.code().to_string(),
+        clean(&w.numbers.join("; ")),
+        clean(&w.next_checks.join("; ")),
+        clean(&w.caution),
+    ]);
+    row
 }
 
 fn envelope<T>(s: &SessionState, e: &Entry<T>) -> Vec<String> {

@@ -4,6 +4,7 @@
 use super::seen::{Agreement, compare, linked_set, seen_for};
 use super::{CAUTIONS, Inputs, Journal, dimension_of, problems, rfc3339};
 use crate::cli::fit_output;
+use crate::present::Style;
 use crate::session::FlowCurveOptions;
 use crate::session::state::{Entry, Moment, SessionState, ViscometerSet};
 use crate::session::trend::{LimitStatus, at_reference, check_limits, spec_rate};
@@ -23,6 +24,10 @@ pub(crate) fn render(inputs: &Inputs) -> anyhow::Result<String> {
         },
         "sessions": inputs.journals.iter().map(|j| session(site, j)).collect::<Vec<_>>(),
         "left_out": inputs.failed,
+        "findings": super::ranked::ranked(inputs)
+            .iter()
+            .map(|r| super::ranked::json(r, Style::SI))
+            .collect::<Vec<_>>(),
         "cautions": CAUTIONS,
     });
     let mut text = serde_json::to_string_pretty(&value)?;

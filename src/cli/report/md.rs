@@ -3,6 +3,8 @@
 use super::md_set::set_section;
 use super::seen::{compact, linked_set};
 use super::{CAUTIONS, Inputs, Journal, clean, local_text, problems, reading_value, utc_text};
+use crate::present::Style;
+use crate::present::findings::words;
 use crate::session::state::{Entry, Moment, SessionState};
 use crate::site::Site;
 use std::fmt::Write as _;
@@ -22,6 +24,7 @@ pub(crate) fn render(inputs: &Inputs) -> String {
         "Sessions: {}, listed by start time. Times are local (with the UTC offset then in force) and UTC.",
         inputs.journals.len()
     );
+    out.push_str(&ranked_findings(inputs));
     for j in &inputs.journals {
         out.push_str(&session(site, j));
     }
@@ -162,8 +165,40 @@ fn notes(s: &SessionState) -> String {
     out
 }
 
+/// The ranked findings of every session, first: what to act on before the detail.
+fn ranked_findings(inputs: &Inputs) -> String {
+    let style = Style::new(inputs.site.unit_system, false);
+    let ranked = super::ranked::ranked(inputs);
+    let mut out = format!("\n## Findings ({}), most urgent first\n\n", ranked.len());
+    if ranked.is_empty() {
+        out.push_str("No rule found anything to report in these sessions.\n");
+    }
+    for (i, r) in ranked.iter().enumerate() {
+        let w = words(&r.finding, style);
+        let _ = writeln!(
+            out,
+            "{}. **{}** (rule `{}`, session {})",
+            i + 1,
+            cell(&w.headline),
+            r.finding.rule.id(),
+            cell(&r.session)
+        );
+        for n in &w.numbers {
+            let _ = writeln!(out, "   - {}", cell(n));
+        }
+        if !w.next_checks.is_empty() {
+            let _ = writeln!(out, "   - Next: {}", cell(&w.next_checks.join("; ")));
+        }
+        let _ = writeln!(out, "   - Caution: {}", cell(&w.caution));
+    }
+    out
+}
+
 fn findings(s: &SessionState) -> String {
-    let mut out = format!("\n### Findings ({})\n\n", s.findings.len());
+    let mut out = format!(
+        "\n### Findings noted by the operator ({})\n\n",
+        s.findings.len()
+    );
     if s.findings.is_empty() {
         out.push_str("None recorded.\n");
     }

@@ -6,11 +6,15 @@
 //! so the same journals give the same bytes.
 
 mod csv;
+mod html;
+mod html_charts;
 mod json;
 mod md;
 mod md_set;
+mod ranked;
 mod runs;
 mod seen;
+mod svg;
 
 use super::args::{Cli, ReportArgs};
 use super::trend::site_or_demo;
@@ -59,6 +63,7 @@ enum Format {
     Markdown,
     Csv,
     Json,
+    Html,
 }
 
 pub fn run(cli: &Cli, args: &ReportArgs) -> anyhow::Result<ExitCode> {
@@ -66,8 +71,9 @@ pub fn run(cli: &Cli, args: &ReportArgs) -> anyhow::Result<ExitCode> {
         "md" | "markdown" => Format::Markdown,
         "csv" => Format::Csv,
         "json" => Format::Json,
+        "html" => Format::Html,
         other => bail!(
-            "--format '{}': accepted values are md, csv or json",
+            "--format '{}': accepted values are md, csv, json or html",
             crate::text::sanitize(other, false)
         ),
     };
@@ -92,6 +98,7 @@ pub fn run(cli: &Cli, args: &ReportArgs) -> anyhow::Result<ExitCode> {
         Format::Markdown => md::render(&inputs).into_bytes(),
         Format::Csv => csv::render(&inputs)?,
         Format::Json => json::render(&inputs)?.into_bytes(),
+        Format::Html => html::render(&inputs).into_bytes(),
     };
     std::io::stdout().lock().write_all(&bytes)?;
     Ok(if inputs.failed.is_empty() {
