@@ -6,7 +6,7 @@ mod args;
 mod check_site;
 mod examples;
 mod fit;
-mod fit_csv;
+pub mod fit_csv;
 mod fit_extra;
 mod fit_output;
 mod fit_pipe;

@@ -24,7 +24,7 @@ pub use error::{JournalError, Stage};
 pub use memory::{Fault, MemorySink};
 pub use naming::{new_session_id, os_user, session_file_name, site_file_stem};
 pub use open::{NewSession, Resumed};
-pub use reader::{Loaded, TornTail, load};
+pub use reader::{Loaded, TornTail, load, scan};
 pub use record::{DialRow, Payload, Record, ResultKind, Severity};
 pub use run_end::PreviousEnd;
 pub use sink::{FileSink, Sink};

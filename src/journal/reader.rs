@@ -73,8 +73,9 @@ pub fn load(path: &Path) -> Result<Loaded, JournalError> {
     scan(path, &bytes)
 }
 
-/// Split `bytes` into records and a possible torn tail, and check the sequence.
-pub(crate) fn scan(path: &Path, bytes: &[u8]) -> Result<Loaded, JournalError> {
+/// Split `bytes` into records and a possible torn tail, and check the sequence (the reader
+/// behind [`load`], public for the fuzz target that feeds it arbitrary bytes).
+pub fn scan(path: &Path, bytes: &[u8]) -> Result<Loaded, JournalError> {
     let corrupt = |line, reason| JournalError::Corrupt {
         path: path.to_path_buf(),
         line,
