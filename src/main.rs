@@ -11,7 +11,10 @@ fn main() -> ExitCode {
     let cli = Cli::parse();
     let outcome = match &cli.command {
         None => rheoside::tui::run(&screen_options(&cli)),
-        Some(command) => rheoside::cli::run(&cli, command),
+        Some(command) => {
+            quiet_on_closed_pipe();
+            rheoside::cli::run(&cli, command)
+        }
     };
     match outcome {
         Ok(code) => code,
@@ -21,6 +24,18 @@ fn main() -> ExitCode {
             let _ = writeln!(std::io::stderr(), "rheoside: {err:#}");
             ExitCode::from(EXIT_BAD_INPUT)
         }
+    }
+}
+
+/// A subcommand piped into `head` (or any reader that stops early) ends quietly, as other
+/// command-line tools do, instead of panicking on the failed write: the default SIGPIPE
+/// action, which Rust's runtime turns off. Only for subcommands, which save before they
+/// print; the screens never write to a pipe.
+fn quiet_on_closed_pipe() {
+    #[cfg(unix)]
+    // SAFETY: restoring a signal's default disposition at start-up, before any thread exists.
+    unsafe {
+        libc::signal(libc::SIGPIPE, libc::SIG_DFL);
     }
 }
 

@@ -118,3 +118,29 @@ fn calculators_do_not_offer_journal_options() {
     assert!(help("record").contains("--log-dir") && help("record").contains("--operator"));
     assert!(help("trend").contains("--log-dir"));
 }
+
+// A subcommand piped into a reader that stops early (`rheoside line ... | head -3`) ended in
+// a "failed printing to stdout: Broken pipe" panic. It must end quietly, as other tools do.
+#[test]
+fn a_closed_pipe_is_not_a_panic() {
+    use std::process::{Command as Std, Stdio};
+    let (reader, writer) = std::io::pipe().unwrap();
+    drop(reader); // the reader is gone before anything is written
+    let out = Std::new(assert_cmd::cargo::cargo_bin("rheoside"))
+        .args([
+            "line",
+            "--line",
+            "L-1",
+            "--product",
+            "chilli-sauce",
+            "--flow",
+            "3 m3/h",
+        ])
+        .current_dir(env!("CARGO_MANIFEST_DIR"))
+        .stdout(writer)
+        .stderr(Stdio::piped())
+        .output()
+        .unwrap();
+    let err = String::from_utf8_lossy(&out.stderr);
+    assert!(!err.contains("panicked"), "{err}");
+}
