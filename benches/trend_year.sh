@@ -28,7 +28,7 @@ for part in 4 2 1; do
     best=""
     for run in 1 2 3; do
         /usr/bin/time -v -o "$tmp/time.txt" target/release/rheoside --log-dir "$dir" \
-            trend --product chilli-sauce --since 400d > "$tmp/out.txt"
+            trend --product chilli-sauce --since "$(( days + 35 ))d" > "$tmp/out.txt"
         wall=$(grep "Elapsed (wall clock)" "$tmp/time.txt" | awk '{print $NF}')
         user=$(grep "User time" "$tmp/time.txt" | awk '{print $NF}')
         sys=$(grep "System time" "$tmp/time.txt" | awk '{print $NF}')
