@@ -80,6 +80,23 @@ fn skip_string_body(chars: &mut std::iter::Peekable<std::str::Chars<'_>>) {
     }
 }
 
+/// Levenshtein distance over characters (Levenshtein 1966), by the classic two-row dynamic
+/// programme: the "did you mean" of site keys and reading names.
+pub fn edit_distance(a: &str, b: &str) -> usize {
+    let b: Vec<char> = b.chars().collect();
+    let mut prev: Vec<usize> = (0..=b.len()).collect();
+    let mut cur = vec![0; b.len() + 1];
+    for (i, ca) in a.chars().enumerate() {
+        cur[0] = i + 1;
+        for (j, cb) in b.iter().enumerate() {
+            let swap = usize::from(ca != *cb);
+            cur[j + 1] = (prev[j] + swap).min(prev[j + 1] + 1).min(cur[j] + 1);
+        }
+        std::mem::swap(&mut prev, &mut cur);
+    }
+    prev[b.len()]
+}
+
 #[cfg(test)]
 mod tests {
     use super::sanitize;

@@ -91,16 +91,7 @@ fn is_pipe_header(text: &str) -> bool {
 
 /// The pairs, in SI.
 pub fn parse(text: &str) -> Result<Vec<PlantPair>> {
-    let mut reader = csv::ReaderBuilder::new()
-        .trim(csv::Trim::All)
-        .comment(Some(b'#'))
-        .from_reader(text.as_bytes());
-    let headers: Vec<String> = reader
-        .headers()
-        .context("the first line must be a header")?
-        .iter()
-        .map(|h| h.to_ascii_lowercase())
-        .collect();
+    let (mut reader, headers) = super::fit_csv::reader_with_headers(text)?;
     if let Some(bad) = headers
         .iter()
         .find(|h| !matches!(h.as_str(), "flow" | "pressure_drop"))

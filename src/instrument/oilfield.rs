@@ -88,12 +88,12 @@ pub fn quick_check(readings: &[DialReading]) -> Result<QuickCheck, InstrumentErr
 }
 
 /// Mean dial at this speed (within 0.5 rpm), if above 0.
-fn dial_at(readings: &[DialReading], rpm: f64) -> Option<f64> {
+pub(crate) fn dial_at(readings: &[DialReading], rpm: f64) -> Option<f64> {
     let at: Vec<f64> = readings
         .iter()
         .filter(|r| (r.rpm - rpm).abs() <= 0.5)
         .map(|r| r.dial)
         .collect();
-    let mean = at.iter().sum::<f64>() / at.len() as f64;
+    let mean = at.iter().sum::<f64>() / at.len().max(1) as f64;
     (!at.is_empty() && mean > 0.0).then_some(mean)
 }

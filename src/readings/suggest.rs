@@ -1,6 +1,7 @@
 //! "Did you mean …?" for a misspelt reading name: the nearest catalogue name or alias.
 
 use super::CATALOGUE;
+use crate::text::edit_distance;
 
 /// The catalogue name nearest to `typed`, if it is near enough to be a plausible slip:
 /// a Levenshtein distance of at most a third of the typed length (at least 1), or the typed
@@ -17,7 +18,7 @@ pub fn nearest_name(typed: &str) -> Option<&'static str> {
             .map(move |n| (k.name, n))
     });
     let best = candidates
-        .map(|(name, spelling)| (levenshtein(&typed, spelling), name))
+        .map(|(name, spelling)| (edit_distance(&typed, spelling), name))
         .filter(|(d, _)| *d <= limit)
         .min_by_key(|(d, _)| *d)
         .map(|(_, name)| name);
@@ -28,22 +29,6 @@ pub fn nearest_name(typed: &str) -> Option<&'static str> {
             _ => None,
         }
     })
-}
-
-/// Classic two-row dynamic programme over characters (Levenshtein 1966).
-fn levenshtein(a: &str, b: &str) -> usize {
-    let b: Vec<char> = b.chars().collect();
-    let mut prev: Vec<usize> = (0..=b.len()).collect();
-    let mut cur = vec![0; b.len() + 1];
-    for (i, ca) in a.chars().enumerate() {
-        cur[0] = i + 1;
-        for (j, cb) in b.iter().enumerate() {
-            let swap = usize::from(ca != *cb);
-            cur[j + 1] = (prev[j] + swap).min(prev[j + 1] + 1).min(cur[j] + 1);
-        }
-        std::mem::swap(&mut prev, &mut cur);
-    }
-    prev[b.len()]
 }
 
 #[cfg(test)]

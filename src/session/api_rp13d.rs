@@ -10,7 +10,7 @@
 //! so the two differ by design (about 6.7 %).
 
 use crate::instrument::oilfield::{
-    LBF_PER_100FT2_IN_PA, annulus_k_dyn_sn_cm2, annulus_n, pipe_k_dyn_sn_cm2, pipe_n,
+    LBF_PER_100FT2_IN_PA, annulus_k_dyn_sn_cm2, annulus_n, dial_at, pipe_k_dyn_sn_cm2, pipe_n,
     plastic_viscosity_mpa_s, yield_point_lbf_100ft2,
 };
 use crate::instrument::{DialReading, Geometry};
@@ -62,17 +62,6 @@ pub fn field_relations(geometry: &Geometry, readings: &[DialReading]) -> Option<
     .chain(out.k_annulus_pa_sn.iter())
     .all(|v| v.is_finite());
     finite.then_some(out)
-}
-
-/// Mean dial at this speed (within 0.5 rpm), if above 0.
-fn dial_at(readings: &[DialReading], rpm: f64) -> Option<f64> {
-    let at: Vec<f64> = readings
-        .iter()
-        .filter(|r| (r.rpm - rpm).abs() <= 0.5)
-        .map(|r| r.dial)
-        .collect();
-    let mean = at.iter().sum::<f64>() / at.len().max(1) as f64;
-    (!at.is_empty() && mean > 0.0).then_some(mean)
 }
 
 /// The note shown beside the YP in Pa, so nobody "corrects" one conversion by the other.

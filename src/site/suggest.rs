@@ -1,5 +1,7 @@
 //! "Did you mean …?" for mistyped keys: the nearest known key by edit distance.
 
+use crate::text::edit_distance;
+
 /// The known key closest to `typed`, if it is near enough to be a plausible typo.
 ///
 /// Case and `-`/`_` are ignored first (`Inner-Diameter` → `inner_diameter`); otherwise the
@@ -13,7 +15,7 @@ pub(crate) fn closest<'k>(typed: &str, known: &[&'k str]) -> Option<&'k str> {
     let limit = (norm.chars().count() / 3).max(1);
     known
         .iter()
-        .map(|k| (levenshtein(&norm, &normalise(k)), *k))
+        .map(|k| (edit_distance(&norm, &normalise(k)), *k))
         .filter(|(d, _)| *d <= limit)
         .min_by_key(|(d, _)| *d)
         .map(|(_, k)| k)
@@ -29,22 +31,6 @@ fn normalise(s: &str) -> String {
             }
         })
         .collect()
-}
-
-/// Classic two-row dynamic programme over characters.
-fn levenshtein(a: &str, b: &str) -> usize {
-    let b: Vec<char> = b.chars().collect();
-    let mut prev: Vec<usize> = (0..=b.len()).collect();
-    let mut cur = vec![0; b.len() + 1];
-    for (i, ca) in a.chars().enumerate() {
-        cur[0] = i + 1;
-        for (j, cb) in b.iter().enumerate() {
-            let swap = if ca == *cb { 0 } else { 1 };
-            cur[j + 1] = (prev[j] + swap).min(prev[j + 1] + 1).min(cur[j] + 1);
-        }
-        std::mem::swap(&mut prev, &mut cur);
-    }
-    prev[b.len()]
 }
 
 #[cfg(test)]
@@ -76,8 +62,8 @@ mod tests {
     #[test]
     fn distance_is_the_textbook_one() {
         // kitten → sitting is the standard example with distance 3.
-        assert_eq!(levenshtein("kitten", "sitting"), 3);
-        assert_eq!(levenshtein("", "abc"), 3);
-        assert_eq!(levenshtein("same", "same"), 0);
+        assert_eq!(edit_distance("kitten", "sitting"), 3);
+        assert_eq!(edit_distance("", "abc"), 3);
+        assert_eq!(edit_distance("same", "same"), 0);
     }
 }
