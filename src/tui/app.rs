@@ -248,6 +248,9 @@ impl App {
         let Some(key) = Key::from_event(ev) else {
             return;
         };
+        // Every key press starts with a clear status line: a message belongs to the action
+        // that caused it, never to a later one.
+        self.status.clear();
         let context = self.context();
         let view_keys = self.active_view().keys();
         let Some(action) = keymap::lookup(context, key, view_keys) else {

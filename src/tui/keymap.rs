@@ -29,6 +29,9 @@ pub enum Action {
     Save,
     AddRow,
     RemoveRow,
+    /// To the speed or the dial column of the same row.
+    ToSpeedColumn,
+    ToDialColumn,
     NextModel,
     PrevModel,
     AutoModel,
@@ -57,6 +60,9 @@ pub enum Scope {
     Moving,
     /// The active view's own bindings (its `keys()` table).
     View,
+    /// The active view's bindings that also act while one of its fields is typed into;
+    /// never a printable key (those go to the field), so only Ctrl and function keys.
+    ViewEditing,
     /// While a field is being typed into (including the note box).
     Editing,
     /// The note box, before the editing keys.
@@ -81,7 +87,7 @@ impl Context {
     pub fn scopes(self) -> Vec<Scope> {
         match self {
             Context::Top(_) => vec![Scope::View, Scope::Moving, Scope::Global, Scope::Always],
-            Context::Editing => vec![Scope::Editing, Scope::Always],
+            Context::Editing => vec![Scope::Editing, Scope::ViewEditing, Scope::Always],
             Context::Note => vec![Scope::NoteBox, Scope::Editing, Scope::Always],
             Context::Help => vec![Scope::Help, Scope::Always],
             Context::ConfirmQuit => vec![Scope::ConfirmQuit, Scope::Always],
@@ -244,7 +250,7 @@ pub fn bindings_for(ctx: Context, view_keys: &'static [Binding]) -> Vec<&'static
 
 /// Where a scope's bindings are listed: the view's own table, or the shared one.
 fn table(scope: Scope, view_keys: &'static [Binding]) -> impl Iterator<Item = &'static Binding> {
-    let rows = if scope == Scope::View {
+    let rows = if matches!(scope, Scope::View | Scope::ViewEditing) {
         view_keys
     } else {
         BINDINGS

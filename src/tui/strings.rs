@@ -56,9 +56,11 @@ pub mod keys {
     pub const HOME: &str = "to the top";
     pub const END: &str = "to the bottom";
     pub const PICK: &str = "pick";
-    pub const EDIT_FIELD: &str = "edit";
+    pub const EDIT_FIELD: &str = "into the form";
     pub const TYPE_VALUE: &str = "type a new value into the selected field";
     pub const SAVE_SET: &str = "save set";
+    pub const TO_SPEED: &str = "to the speed column of this row";
+    pub const TO_DIAL: &str = "to the dial column of this row";
     pub const ADD_ROW: &str = "add a reading row";
     pub const REMOVE_ROW: &str = "remove the selected reading row";
     pub const NEXT_MODEL: &str = "model";
@@ -151,9 +153,22 @@ pub mod readings {
     pub const NOTES: &str = "Notes";
     pub const SPEED: &str = "Speed";
     pub const DIAL: &str = "Dial";
-    pub const STORES: &str = "stored as";
+    pub const STORES: &str = "shear rate, stress";
     pub const NO_VISCOMETER: &str = "no viscometer in the site config";
-    pub const OK_HINT: &str = "Fields are checked as you type; s saves the set to the journal.";
+    pub const OK_HINT: &str =
+        "Fields are checked as you type. Ctrl-S or Enter on Save set journals the set.";
+    pub const PARKED_HINT: &str =
+        "Enter, Down or a digit goes into the form; Tab goes to the next view.";
+    pub const SAVE_LINE: &str = "Save set";
+    pub const SAVE_LINE_HINT: &str = "[ Save set ]  Enter journals the set";
+    pub const ON_SAVE_LINE: &str = "On Save set: Enter journals the set; Up goes back to Notes.";
+    pub const ON_VISCOMETER: &str =
+        "Left / Right choose the viscometer; typed dials are kept when it changes.";
+    pub const LEFT_FORM: &str = "Left the form (the field was put back as it was); Enter or a digit goes back in.";
+    pub const MOVED_TO: &str = "Now at";
+    pub const REFUSED_AT: &str = "the cursor is on";
+    pub const FEW_READINGS: &str = "readings: fewer than the simplest model needs";
+    pub const CONFIRM_FEW: &str = "Press Ctrl-S again to save it anyway, or type more dials.";
     pub const NEED_PRODUCT: &str =
         "No product picked: pick one on the Site view (Shift-Tab) first.";
     pub const NEED_VISCOMETER: &str =
@@ -161,8 +176,16 @@ pub mod readings {
     pub const NEED_READING: &str = "No dial reading entered: type at least one dial value.";
     pub const DIAL_NEEDS_SPEED: &str = "a dial reading needs a speed";
     pub const NEGATIVE_DIAL: &str = "a dial reading cannot be negative; type 0 or more";
+    pub const PEGGED: &str = "at full scale (pegged): not valid; read at a lower speed";
+    pub const LOW_SCALE: &str = "below 10 % of scale: low accuracy";
+    pub const SPEED_RANGE: &str = "speed outside this instrument's";
+    pub const ABOVE_FASTER: &str = "above the reading at a higher speed, row";
     pub const ROW: &str = "row";
     pub const SAVED: &str = "Set sent to the journal; its flow curve is on the Flow curve view.";
+    pub const SWITCHED: &str = "Viscometer";
+    pub const DIALS_KEPT: &str = "typed dials kept";
+    pub const SPEEDS_SET: &str = "speeds set to this instrument's usual ones";
+    pub const SPEEDS_KEPT: &str = "speeds kept as typed";
     pub const SET_SUMMARY: &str = "Viscometer set";
     pub const READINGS_WORD: &str = "readings";
     pub const NO_TEMPERATURE: &str = "no temperature";
