@@ -164,8 +164,11 @@ fn enter_the_set(s: &mut Session) -> String {
     for d in ["110", "76", "61.5", "44", "16", "14"] {
         s.send(&format!("{d}\r"));
     }
-    s.wait_for("0.314 rad/s");
-    s.send("s");
+    // Row 6 shows what it will store: 3 rpm x 1.7023 = 5.11 1/s, 14 x 0.511 = 7.15 Pa
+    // (API RP 13D standard geometry constants).
+    s.wait_for("5.11 1/s  7.15 Pa");
+    // Ctrl-S (0x13) saves; a plain `s` would type into the field.
+    s.send("\x13");
     // The set's own line says "saved" only once the writer thread has fsynced it, and the
     // top bar once the curve journalled after it is on disk too.
     s.wait_for("chilli-sauce  saved");
@@ -214,6 +217,7 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
     assert!((by("K").unwrap_or(0.0) - 0.8).abs() < 0.08);
     assert!((by("n").unwrap_or(0.0) - 0.6).abs() < 0.06);
 
+    // The save left the form, so `q` is a key again.
     s.send("q");
     let status = s.wait_exit();
     assert!(

@@ -69,11 +69,11 @@ pub mod keys {
     pub const SET_RATE: &str = "new shear rate";
     pub const TYPE_RATE: &str = "type a shear rate for the apparent viscosity";
     pub const ACCEPT: &str = "accept";
-    pub const ACCEPT_NEXT: &str = "accept, next field";
+    pub const ACCEPT_NEXT: &str = "next field";
     pub const ACCEPT_PREV: &str = "accept, previous field";
     pub const ACCEPT_UP: &str = "accept, field above";
     pub const ACCEPT_DOWN: &str = "accept, field below";
-    pub const CANCEL_EDIT: &str = "undo changes";
+    pub const CANCEL_EDIT: &str = "leave, put back";
     pub const DELETE_BACK: &str = "delete before the cursor";
     pub const DELETE_FORWARD: &str = "delete at the cursor";
     pub const CURSOR_LEFT: &str = "cursor left";
@@ -164,7 +164,8 @@ pub mod readings {
     pub const ON_SAVE_LINE: &str = "On Save set: Enter journals the set; Up goes back to Notes.";
     pub const ON_VISCOMETER: &str =
         "Left / Right choose the viscometer; typed dials are kept when it changes.";
-    pub const LEFT_FORM: &str = "Left the form (the field was put back as it was); Enter or a digit goes back in.";
+    pub const LEFT_FORM: &str =
+        "Left the form (the field was put back as it was); Enter or a digit goes back in.";
     pub const MOVED_TO: &str = "Now at";
     pub const REFUSED_AT: &str = "the cursor is on";
     pub const FEW_READINGS: &str = "readings: fewer than the simplest model needs";
@@ -181,6 +182,11 @@ pub mod readings {
     pub const SPEED_RANGE: &str = "speed outside this instrument's";
     pub const ABOVE_FASTER: &str = "above the reading at a higher speed, row";
     pub const ROW: &str = "row";
+    pub const NEGATIVE_SHORT: &str = "negative";
+    pub const PEGGED_SHORT: &str = "pegged";
+    pub const LOW_SCALE_SHORT: &str = "low on scale";
+    pub const RANGE_SHORT: &str = "outside";
+    pub const ABOVE_SHORT: &str = "above row";
     pub const SAVED: &str = "Set sent to the journal; its flow curve is on the Flow curve view.";
     pub const SWITCHED: &str = "Viscometer";
     pub const DIALS_KEPT: &str = "typed dials kept";

@@ -136,7 +136,7 @@ impl ReadingsView {
             Action::AddRow => return self.row_change(Form::add_row),
             Action::RemoveRow => return self.row_change(Form::remove_row),
             Action::ToSpeedColumn | Action::ToDialColumn => {
-                self.form.to_column(action == Action::ToSpeedColumn);
+                self.form.go_to_column(action == Action::ToSpeedColumn);
                 self.arrive();
                 return self.moved();
             }

@@ -1,11 +1,11 @@
 //! Drawing the viscometer-set form: picks, viscometer, temperature, the reading table with
 //! what each row will store, notes, and the message for the selected field.
 
-use super::readings_form::{Focus, Form, RowNote, RowPreview};
+use super::readings_form::{Focus, Form, RowPreview};
 use crate::present;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
-use crate::tui::layout::row;
+use crate::tui::layout::{clip_words, row};
 use crate::tui::strings::readings as s;
 use crate::tui::theme::Theme;
 use crate::tui::widgets::field::{Checked, Field};
@@ -61,7 +61,11 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
         w2 = usize::from(DIAL_W)
     );
     frame.render_widget(Paragraph::new(header).style(t.dim), row(area, 3));
-    let geometry = ctx.site.viscometers.get(form.viscometer).map(|v| &v.geometry);
+    let geometry = ctx
+        .site
+        .viscometers
+        .get(form.viscometer)
+        .map(|v| &v.geometry);
     let previews = form.preview(geometry);
     for (i, r) in form.rows.iter().enumerate() {
         let line = row(area, 4 + i as u16);
@@ -93,7 +97,7 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
         }
         .intersection(line);
         let preview = previews.get(i).cloned().unwrap_or_default();
-        let line = row_stored(&r.speed, &r.dial, &preview, ctx);
+        let line = row_stored(&r.speed, &r.dial, &preview, stored.width, ctx);
         frame.render_widget(Paragraph::new(line), stored);
     }
     let notes_row = 4 + form.rows.len() as u16;
@@ -115,14 +119,21 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
         t.dim
     };
     let save = Paragraph::new(Span::styled(s::SAVE_LINE_HINT, save_style));
-    frame.render_widget(save, Rect { x: area.x + LABEL_W, ..row(area, notes_row + 1) }.intersection(area));
+    frame.render_widget(
+        save,
+        Rect {
+            x: area.x + LABEL_W,
+            ..row(area, notes_row + 1)
+        }
+        .intersection(area),
+    );
     let message = Rect {
         y: area.y + notes_row + 2,
         height: area.height.saturating_sub(notes_row + 2),
         ..area
     }
     .intersection(area);
-    frame.render_widget(message_for(form, editing, t), message);
+    frame.render_widget(message_for(form, editing, &previews, ctx), message);
 }
 
 /// Styles only the label's own cells, so fields drawn beside it start from plain cells.
@@ -225,9 +236,16 @@ fn draw_si(frame: &mut Frame, line: Rect, x: u16, field: &Field, t: &Theme) {
     frame.render_widget(Paragraph::new(text).style(t.ok), area);
 }
 
-/// What a row will give (its shear rate and shear stress, bright once it has a dial), its
-/// checks in words, or which part is wrong.
-fn row_stored<'a>(speed: &Field, dial: &Field, preview: &RowPreview, ctx: &Ctx) -> Line<'a> {
+/// What a row will give (its shear rate and shear stress, bright once it has a dial), then
+/// its first check in short words (the message line below the form has the full words), or
+/// which part is wrong.
+fn row_stored<'a>(
+    speed: &Field,
+    dial: &Field,
+    preview: &RowPreview,
+    width: u16,
+    ctx: &Ctx,
+) -> Line<'a> {
     let t = &ctx.theme;
     let style = ctx.style();
     let problem = speed
@@ -235,12 +253,9 @@ fn row_stored<'a>(speed: &Field, dial: &Field, preview: &RowPreview, ctx: &Ctx) 
         .map(|e| (s::SPEED, e))
         .or(dial.error().map(|e| (s::DIAL, e)));
     if let Some((which, err)) = problem {
-        return Line::styled(style.text(&format!("{which}: {err}")), t.error);
-    }
-    if let Some(note) = preview.notes.first() {
-        let strong = matches!(note, RowNote::NegativeDial | RowNote::Pegged);
-        let mark = if strong { t.error } else { t.warn };
-        return Line::styled(format!("! {}", style.text(&note.words())), mark);
+        // The full words are on the message line when the row is selected.
+        let text = style.text(&format!("{which}: {err}"));
+        return Line::styled(clip_words(&text, usize::from(width), t.marks.cut), t.error);
     }
     let rate = preview
         .rate_per_s
@@ -248,24 +263,52 @@ fn row_stored<'a>(speed: &Field, dial: &Field, preview: &RowPreview, ctx: &Ctx) 
     let stress = preview
         .stress_pa
         .map(|p| present::quantity(p, Dimension::Stress, style));
-    match (rate, stress) {
-        (Some(r), Some(p)) => Line::styled(format!("{r}  {p}"), t.ok),
-        (Some(r), None) => Line::styled(r, t.dim),
-        (None, Some(_)) => Line::styled(format!("! {}", s::DIAL_NEEDS_SPEED), t.error),
-        (None, None) => Line::default(),
+    let mut spans = match (rate, stress) {
+        // Fixed columns, so a typed digit redraws its own value only.
+        (Some(r), Some(p)) => vec![Span::styled(format!("{r:<10}{p:<10}"), t.ok)],
+        (Some(r), None) => vec![Span::styled(format!("{r:<20}"), t.dim)],
+        (None, Some(_)) => vec![Span::styled(format!("! {}", s::DIAL_NEEDS_SPEED), t.error)],
+        (None, None) => Vec::new(),
+    };
+    if let Some(note) = preview.notes.first() {
+        let mark = if note.is_strong() { t.error } else { t.warn };
+        spans.push(Span::styled(
+            format!("! {}", style.text(&note.short())),
+            mark,
+        ));
     }
+    Line::from(spans)
 }
 
-/// The selected field's problem in words, or a hint for where the cursor is; wrapped, so
-/// a long message is never cut.
-fn message_for(form: &Form, editing: bool, t: &Theme) -> Paragraph<'static> {
+/// The selected field's problem in words, the checks on the selected row in full, or a hint
+/// for where the cursor is; wrapped, so a long message is never cut.
+fn message_for(
+    form: &Form,
+    editing: bool,
+    previews: &[RowPreview],
+    ctx: &Ctx,
+) -> Paragraph<'static> {
+    let t = &ctx.theme;
     let error = form.field(form.focus).and_then(Field::error);
+    let row_notes = match form.focus {
+        Focus::Speed(i) | Focus::Dial(i) => previews.get(i).map(|p| p.notes.as_slice()),
+        _ => None,
+    }
+    .unwrap_or_default();
     let (text, style): (String, Style) = match (editing, error, form.focus) {
         (false, _, _) => (s::PARKED_HINT.to_string(), t.dim),
         (true, Some(err), _) => (format!("! {err}"), t.error),
+        (true, None, _) if !row_notes.is_empty() => {
+            let words: Vec<String> = row_notes.iter().map(|n| n.words()).collect();
+            let strong = row_notes.iter().any(|n| n.is_strong());
+            let mark = if strong { t.error } else { t.warn };
+            (format!("! {}.", words.join("; ")), mark)
+        }
         (true, None, Focus::Viscometer) => (s::ON_VISCOMETER.to_string(), t.dim),
         (true, None, Focus::Save) => (s::ON_SAVE_LINE.to_string(), t.dim),
         (true, None, _) => (s::OK_HINT.to_string(), t.dim),
     };
-    Paragraph::new(text).style(style).wrap(Wrap { trim: true })
+    Paragraph::new(ctx.style().text(&text))
+        .style(style)
+        .wrap(Wrap { trim: true })
 }

@@ -124,7 +124,8 @@ impl Form {
         self.fixed_speeds = matches!(new, Some(Geometry::StandardSixSpeed));
         let typed: Vec<&str> = self.rows.iter().map(|r| r.speed.text()).collect();
         let usual_old: Vec<String> = usual_speeds(old);
-        let same = typed.len() == usual_old.len() && typed.iter().zip(&usual_old).all(|(a, b)| a == b);
+        let same =
+            typed.len() == usual_old.len() && typed.iter().zip(&usual_old).all(|(a, b)| a == b);
         let new_speeds = usual_speeds(new);
         if !same || new_speeds == usual_old {
             return false;
@@ -201,7 +202,7 @@ impl Form {
     }
 
     /// To the speed (`true`) or dial column of the same row; elsewhere nothing moves.
-    pub fn to_column(&mut self, speed: bool) {
+    pub fn go_to_column(&mut self, speed: bool) {
         self.focus = match (self.focus, speed) {
             (Focus::Dial(i), true) => Focus::Speed(i),
             (Focus::Speed(i), false) => Focus::Dial(i),
@@ -344,13 +345,37 @@ pub enum RowNote {
     /// Below 10 % of full scale (common practice, no source).
     LowScale,
     /// Outside the instrument's speeds (the standard six-speed runs 3 to 600 rpm).
-    SpeedOutOfRange { lo_rpm: f64, hi_rpm: f64 },
+    SpeedOutOfRange {
+        lo_rpm: f64,
+        hi_rpm: f64,
+    },
     /// Higher than the reading of a row at a higher speed (1-based row).
     AboveFasterRow(usize),
 }
 
 impl RowNote {
-    /// Short words for the table.
+    /// A reading the fit cannot use as typed (shown in the error colour).
+    pub fn is_strong(self) -> bool {
+        matches!(
+            self,
+            RowNote::NegativeDial | RowNote::Pegged | RowNote::SpeedOutOfRange { .. }
+        )
+    }
+
+    /// A few words for the table's last column (the full words go on the message line).
+    pub fn short(self) -> String {
+        match self {
+            RowNote::NegativeDial => s::NEGATIVE_SHORT.to_string(),
+            RowNote::Pegged => s::PEGGED_SHORT.to_string(),
+            RowNote::LowScale => s::LOW_SCALE_SHORT.to_string(),
+            RowNote::SpeedOutOfRange { lo_rpm, hi_rpm } => {
+                format!("{} {lo_rpm}-{hi_rpm} rpm", s::RANGE_SHORT)
+            }
+            RowNote::AboveFasterRow(row) => format!("{} {row}", s::ABOVE_SHORT),
+        }
+    }
+
+    /// The check in full words.
     pub fn words(self) -> String {
         match self {
             RowNote::NegativeDial => s::NEGATIVE_DIAL.to_string(),
@@ -406,7 +431,10 @@ fn row_notes(
     if let (Some(n), Geometry::StandardSixSpeed) = (rpm, g) {
         let (lo, hi) = (3.0, 600.0);
         if !(lo - 1e-9..=hi + 1e-9).contains(&n) {
-            notes.push(RowNote::SpeedOutOfRange { lo_rpm: lo, hi_rpm: hi });
+            notes.push(RowNote::SpeedOutOfRange {
+                lo_rpm: lo,
+                hi_rpm: hi,
+            });
         }
     }
     if let (Some(n), Some(d)) = (rpm, dial) {
