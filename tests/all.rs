@@ -32,6 +32,7 @@ mod site;
 mod site_tank;
 mod trend;
 mod tui_e2e;
+mod tui_form;
 mod tui_keys;
 mod tui_render;
 mod units;

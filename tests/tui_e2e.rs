@@ -269,6 +269,44 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
     ));
 }
 
+/// Letters are text on the form (issue 8): after a saved set, a note with every letter a-z
+/// typed into Notes saves nothing, opens nothing and leaves the model as it was.
+#[test]
+fn every_letter_typed_on_the_readings_form_is_text() {
+    let logs = tempfile::tempdir().expect("a temp dir");
+    let log_dir = logs.path().to_str().expect("a UTF-8 path");
+    let mut s = Session::start(&["--log-dir", log_dir, "--operator", "e2e"]);
+    enter_the_set(&mut s);
+    s.wait_for("Herschel–Bulkley (auto)");
+    // Back to Readings (Shift-Tab); Enter goes into the form at the first dial and six
+    // Downs reach Notes.
+    s.send("\x1b[Z");
+    s.wait_for("Viscometer set");
+    s.send("\r");
+    s.send(&"\x1b[B".repeat(6));
+    let note = "sampled: the quick brown fox jumps over the lazy dog";
+    s.send(note);
+    s.wait_for(note);
+    // Accept the note (Enter goes on to the Save set line), leave the form (Esc), and look
+    // at the Flow curve view: still the automatic choice.
+    s.send("\r\x1b");
+    s.wait_for("Enter, Down or a digit goes into the form");
+    s.send("\t");
+    s.wait_for_all(&["Herschel–Bulkley (auto)", "m model"]);
+    s.send("q");
+    // The note is unsaved input on the form: quitting asks first.
+    s.wait_for("The readings form has input that is not saved");
+    s.send("y");
+    assert!(s.wait_exit().success());
+    let journal = load(&journal_in(logs.path())).expect("the journal reads back");
+    let kinds: Vec<&str> = journal.records.iter().map(|r| r.payload.kind()).collect();
+    assert_eq!(
+        kinds,
+        ["session-start", "viscometer-set", "result", "session-end"],
+        "one set, its curve, no note, no model choice"
+    );
+}
+
 /// A signal from outside (a closed SSH session, a service stop) still flushes the journal
 /// and gives the terminal back.
 fn stopped_by(signal: &str) {

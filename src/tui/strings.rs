@@ -188,7 +188,12 @@ pub mod readings {
     pub const RANGE_SHORT: &str = "outside";
     pub const ABOVE_SHORT: &str = "above row";
     pub const SAVED: &str = "Set sent to the journal; its flow curve is on the Flow curve view.";
-    pub const SWITCHED: &str = "Viscometer";
+    pub const SWITCHED: &str = "Viscometer now";
+    pub const WAS: &str = "was";
+    pub const ONLY_VISCOMETER: &str = "The site config lists one viscometer only.";
+    pub const DIALS_TYPED_ON: &str = "dial(s) typed on";
+    pub const PRESS_AGAIN_TO_SWITCH: &str = "Press the same arrow again to switch to";
+    pub const KEEPING_DIALS: &str = "(typed dials and speeds are kept).";
     pub const DIALS_KEPT: &str = "typed dials kept";
     pub const SPEEDS_SET: &str = "speeds set to this instrument's usual ones";
     pub const SPEEDS_KEPT: &str = "speeds kept as typed";

@@ -62,10 +62,11 @@ pub struct ReadingsView {
     form: Form,
     /// In the form: the focused field takes every printable key.
     editing: bool,
-    /// The next printable key replaces the field's text (it was entered by Tab or arrows).
-    replace_next: bool,
     /// A short set was refused once; the next Ctrl-S saves it anyway.
     confirm_few: bool,
+    /// Dials are typed and a viscometer change was asked for once (this way); the next
+    /// press the same way switches.
+    confirm_switch: Option<isize>,
 }
 
 fn geometry(ctx: &Ctx, index: usize) -> Option<&Geometry> {
@@ -77,8 +78,8 @@ impl ReadingsView {
         ReadingsView {
             form: Form::new(0, geometry(ctx, 0)),
             editing: false,
-            replace_next: false,
             confirm_few: false,
+            confirm_switch: None,
         }
     }
 
@@ -97,33 +98,50 @@ impl ReadingsView {
     fn arrive(&mut self) {
         if let Some(field) = self.form.field_mut(self.form.focus) {
             field.begin_edit();
-            self.replace_next = !field.is_empty();
+            self.form.replace_next = !field.is_empty();
         } else {
-            self.replace_next = false;
+            self.form.replace_next = false;
         }
     }
 
+    /// Left / Right on the viscometer line. With dials typed, the first press asks and a
+    /// second press the same way switches (dials and speeds kept as typed).
     fn cycle_viscometer(&mut self, ctx: &Ctx, step: isize) -> Vec<Effect> {
         let n = ctx.site.viscometers.len();
-        if n == 0 {
-            return Vec::new();
+        if n < 2 {
+            return vec![Effect::Status(s::ONLY_VISCOMETER.to_string())];
         }
         let old = self.form.viscometer;
         let new = (old as isize + step).rem_euclid(n as isize) as usize;
+        let id = |i: usize| ctx.site.viscometers.get(i).map_or("", |v| v.id.as_str());
+        let dials = self.form.dials_typed();
+        if dials > 0 && self.confirm_switch != Some(step) {
+            self.confirm_switch = Some(step);
+            let text = format!(
+                "{dials} {} {}. {} {} {}",
+                s::DIALS_TYPED_ON,
+                sanitize(id(old), false),
+                s::PRESS_AGAIN_TO_SWITCH,
+                sanitize(id(new), false),
+                s::KEEPING_DIALS
+            );
+            return vec![Effect::Status(text)];
+        }
+        self.confirm_switch = None;
         let speeds_changed = self
             .form
             .set_viscometer(new, geometry(ctx, old), geometry(ctx, new));
-        let id = ctx.site.viscometers.get(new).map_or("", |v| v.id.as_str());
         let speeds = if speeds_changed {
             s::SPEEDS_SET
         } else {
             s::SPEEDS_KEPT
         };
-        let dials = self.form.dials_typed();
         let text = format!(
-            "{} {}: {dials} {}; {speeds}.",
+            "{} {} ({} {}): {dials} {}; {speeds}.",
             s::SWITCHED,
-            sanitize(id, false),
+            sanitize(id(new), false),
+            s::WAS,
+            sanitize(id(old), false),
             s::DIALS_KEPT
         );
         vec![Effect::Status(text)]
@@ -172,7 +190,7 @@ impl ReadingsView {
 
     fn on_field(&mut self, action: Action) -> Vec<Effect> {
         let focus = self.form.focus;
-        let replace = std::mem::take(&mut self.replace_next);
+        let replace = std::mem::take(&mut self.form.replace_next);
         let Some(field) = self.form.field_mut(focus) else {
             return Vec::new();
         };
@@ -190,7 +208,7 @@ impl ReadingsView {
     /// Leave the form: the field being typed goes back as it was.
     fn park(&mut self) -> Vec<Effect> {
         self.editing = false;
-        self.replace_next = false;
+        self.form.replace_next = false;
         vec![Effect::Status(s::LEFT_FORM.to_string())]
     }
 
@@ -337,6 +355,9 @@ impl View for ReadingsView {
         if self.editing {
             if action != Action::Save {
                 self.confirm_few = false;
+            }
+            if !matches!(action, Action::Left | Action::Right) {
+                self.confirm_switch = None;
             }
             return self.handle_editing(action, ctx);
         }

@@ -61,12 +61,7 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
         w2 = usize::from(DIAL_W)
     );
     frame.render_widget(Paragraph::new(header).style(t.dim), row(area, 3));
-    let geometry = ctx
-        .site
-        .viscometers
-        .get(form.viscometer)
-        .map(|v| &v.geometry);
-    let previews = form.preview(geometry);
+    let previews = form.preview(ctx.site.viscometers.get(form.viscometer));
     for (i, r) in form.rows.iter().enumerate() {
         let line = row(area, 4 + i as u16);
         let number = Span::styled(format!("{:>3}", i + 1), t.dim);
@@ -204,6 +199,8 @@ fn draw_field(
     .intersection(line);
     let selected = form.focus == focus;
     let style = match (selected, editing) {
+        // Its text is selected: the next key replaces it.
+        (true, true) if form.replace_next => t.selected,
         (true, true) => t.field_editing,
         (true, false) => t.selected,
         _ if field.error().is_some() => t.error,

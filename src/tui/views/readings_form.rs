@@ -3,6 +3,7 @@
 
 use crate::instrument::{Geometry, STANDARD_SPEEDS_RPM};
 use crate::journal::DialRow;
+use crate::site::Viscometer;
 use crate::tui::strings::readings as s;
 use crate::tui::widgets::field::{Checked, Field, FieldKind};
 use crate::units::Dimension;
@@ -79,6 +80,9 @@ pub struct Form {
     pub focus: Focus,
     /// The instrument reads at fixed speeds (the standard six-speed): Tab goes dial to dial.
     pub fixed_speeds: bool,
+    /// The focused field was entered by Tab or an arrow: its text is selected and the next
+    /// printable key replaces it.
+    pub replace_next: bool,
 }
 
 /// The speeds a geometry is usually read at, as typed text.
@@ -103,6 +107,7 @@ impl Form {
             notes: Field::new(FieldKind::Text(NOTES_MAX_CHARS)),
             focus: Focus::Dial(0),
             fixed_speeds: matches!(geometry, Some(Geometry::StandardSixSpeed)),
+            replace_next: false,
         }
     }
 
@@ -111,9 +116,10 @@ impl Form {
         *self = Form::new(self.viscometer, geometry);
     }
 
-    /// Switch viscometer. Typed dials are always kept; speeds still at the old instrument's
-    /// usual values take the new one's (cleared where it has none). True when the speeds
-    /// changed, for the status line.
+    /// Switch viscometer. Typed dials are always kept, and so are the speeds once a dial is
+    /// typed (they were read together); otherwise speeds still at the old instrument's usual
+    /// values take the new one's (cleared where it has none). True when the speeds changed,
+    /// for the status line.
     pub fn set_viscometer(
         &mut self,
         index: usize,
@@ -127,7 +133,7 @@ impl Form {
         let same =
             typed.len() == usual_old.len() && typed.iter().zip(&usual_old).all(|(a, b)| a == b);
         let new_speeds = usual_speeds(new);
-        if !same || new_speeds == usual_old {
+        if !same || new_speeds == usual_old || self.dials_typed() > 0 {
             return false;
         }
         for (row, speed) in self.rows.iter_mut().zip(new_speeds) {
@@ -184,15 +190,26 @@ impl Form {
         order.iter().position(|f| *f == at).unwrap_or(0)
     }
 
+    /// Tab: from a dial to the next row's dial (to its speed only on an instrument without
+    /// fixed speeds whose next speed is still empty), so Tab never lands in a speed that
+    /// already holds a value.
     pub fn next(&mut self) {
+        let rows = self.rows.len();
+        if let Focus::Dial(i) | Focus::Speed(i) = self.focus {
+            let from_speed = matches!(self.focus, Focus::Speed(_));
+            self.focus = match (from_speed, i + 1 < rows) {
+                (true, _) => Focus::Dial(i),
+                (false, true) if self.fixed_speeds || !self.rows[i + 1].speed.is_empty() => {
+                    Focus::Dial(i + 1)
+                }
+                (false, true) => Focus::Speed(i + 1),
+                (false, false) => Focus::Notes,
+            };
+            return;
+        }
         let order = self.order();
         let at = self.place(&order);
-        let stepped = order[(at + 1).min(order.len() - 1)];
-        self.focus = match (self.focus, stepped) {
-            // From a speed reached by hand on a fixed-speed set, Tab goes to its own dial.
-            (Focus::Speed(i), _) if self.fixed_speeds => Focus::Dial(i),
-            (_, f) => f,
-        };
+        self.focus = order[(at + 1).min(order.len() - 1)];
     }
 
     pub fn prev(&mut self) {
@@ -344,7 +361,8 @@ pub enum RowNote {
     Pegged,
     /// Below 10 % of full scale (common practice, no source).
     LowScale,
-    /// Outside the instrument's speeds (the standard six-speed runs 3 to 600 rpm).
+    /// Outside the instrument's speeds (the standard six-speed runs 3 to 600 rpm; others
+    /// from the site config when given).
     SpeedOutOfRange {
         lo_rpm: f64,
         hi_rpm: f64,
@@ -390,11 +408,12 @@ impl RowNote {
 }
 
 impl Form {
-    /// Each row's shear rate and stress on this geometry, with its checks.
-    pub fn preview(&self, geometry: Option<&Geometry>) -> Vec<RowPreview> {
-        let Some(g) = geometry else {
+    /// Each row's shear rate and stress on this instrument, with its checks.
+    pub fn preview(&self, viscometer: Option<&Viscometer>) -> Vec<RowPreview> {
+        let Some(v) = viscometer else {
             return vec![RowPreview::default(); self.rows.len()];
         };
+        let g = &v.geometry;
         let typed: Vec<(Option<f64>, Option<f64>)> = self
             .rows
             .iter()
@@ -405,7 +424,7 @@ impl Form {
             .map(|&(rpm, dial)| RowPreview {
                 rate_per_s: rpm.map(|n| n * g.newtonian_rate_per_rpm()),
                 stress_pa: dial.map(|d| d * g.stress_per_dial_pa()),
-                notes: row_notes(g, rpm, dial, &typed),
+                notes: row_notes(g, v.speed_range_rpm, rpm, dial, &typed),
             })
             .collect()
     }
@@ -413,6 +432,7 @@ impl Form {
 
 fn row_notes(
     g: &Geometry,
+    speed_range_rpm: Option<(f64, f64)>,
     rpm: Option<f64>,
     dial: Option<f64>,
     all: &[(Option<f64>, Option<f64>)],
@@ -428,14 +448,13 @@ fn row_notes(
             notes.push(RowNote::LowScale);
         }
     }
-    if let (Some(n), Geometry::StandardSixSpeed) = (rpm, g) {
-        let (lo, hi) = (3.0, 600.0);
-        if !(lo - 1e-9..=hi + 1e-9).contains(&n) {
-            notes.push(RowNote::SpeedOutOfRange {
-                lo_rpm: lo,
-                hi_rpm: hi,
-            });
-        }
+    if let (Some(n), Some((lo, hi))) = (rpm, speed_range_rpm)
+        && !(lo - 1e-9..=hi + 1e-9).contains(&n)
+    {
+        notes.push(RowNote::SpeedOutOfRange {
+            lo_rpm: lo,
+            hi_rpm: hi,
+        });
     }
     if let (Some(n), Some(d)) = (rpm, dial) {
         let faster_lower = all
