@@ -41,3 +41,9 @@ fn choose_12(bencher: divan::Bencher) {
     let opts = FitOptions::default();
     bencher.bench(|| choose(black_box(&points), black_box(&opts)));
 }
+
+/// The Student t quantile behind every interval (one per fit).
+#[divan::bench]
+fn student_t_975(bencher: divan::Bencher) {
+    bencher.bench(|| rheoside::rheology::stats::t975(black_box(9)));
+}

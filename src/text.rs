@@ -23,6 +23,27 @@ pub fn sanitize(input: &str, keep_newlines: bool) -> String {
     out
 }
 
+/// The first control or format character in `s` (character position from 1, the character),
+/// if any. Format characters (Unicode category Cf: zero-width, bidirectional and invisible
+/// marks) change what a value looks like without showing, so a typed value holding one is
+/// refused rather than cleaned: "1\u{7f}2 bar" must not become "12 bar".
+pub fn first_hidden_char(s: &str) -> Option<(usize, char)> {
+    s.chars()
+        .enumerate()
+        .find(|(_, c)| c.is_control() || is_format_char(*c))
+        .map(|(i, c)| (i + 1, c))
+}
+
+/// Unicode general category Cf (Unicode 15 character database, DerivedGeneralCategory.txt).
+fn is_format_char(c: char) -> bool {
+    matches!(c,
+        '\u{ad}' | '\u{600}'..='\u{605}' | '\u{61c}' | '\u{6dd}' | '\u{70f}' | '\u{890}'..='\u{891}'
+        | '\u{8e2}' | '\u{180e}' | '\u{200b}'..='\u{200f}' | '\u{202a}'..='\u{202e}'
+        | '\u{2060}'..='\u{2064}' | '\u{2066}'..='\u{206f}' | '\u{feff}' | '\u{fff9}'..='\u{fffb}'
+        | '\u{110bd}' | '\u{110cd}' | '\u{13430}'..='\u{1343f}' | '\u{1bca0}'..='\u{1bca3}'
+        | '\u{1d173}'..='\u{1d17a}' | '\u{e0001}' | '\u{e0020}'..='\u{e007f}')
+}
+
 /// Bidirectional overrides can make a note display differently from what it says.
 fn is_bidi_control(c: char) -> bool {
     matches!(c, '\u{202a}'..='\u{202e}' | '\u{2066}'..='\u{2069}')

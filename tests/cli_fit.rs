@@ -271,7 +271,7 @@ fn bad_input_exits_2_with_a_message() {
         &["--weight", "heavy"],
     ));
     assert!(
-        err.contains("accepted values are 'relative' or 'none'"),
+        err.contains("accepted values are 'none', 'relative' or 'log'"),
         "{err}"
     );
     let err = stderr_of(fit(

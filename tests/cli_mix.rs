@@ -301,11 +301,12 @@ fn bad_input_exits_2_with_a_clear_message() {
         &with(&["--impeller-diameter", "1.7", "--speed", "30 rpm"]),
         "no flow curve given",
     );
-    refused(&["--tank", "TK-1", "--mu", "1"], "--tank needs --site");
-    refused(
-        &["--site", DEMO, "--tank", "TK-9", "--mu", "1"],
-        "its tanks: TK-1, TK-2",
-    );
+    // --site's help promises the demo site by default: a tank id alone finds it there.
+    let demo_default = mix(&["--tank", "TK-1", "--mu", "1", "--json"]);
+    let with_site = mix(&["--site", DEMO, "--tank", "TK-1", "--mu", "1", "--json"]);
+    assert_eq!(demo_default.status.code(), Some(0));
+    assert_eq!(json_of(&demo_default), json_of(&with_site));
+    refused(&["--tank", "TK-9", "--mu", "1"], "its tanks: TK-1, TK-2");
     refused(
         &with(&[
             "--impeller-diameter",

@@ -293,19 +293,26 @@ fn oilfield_relations_worked_example() {
 }
 
 #[test]
-fn scale_flags_at_9_and_101_percent() {
-    // Below 10 % of full scale is low accuracy, above 100 % is off scale (common practice,
-    // no source). Standard full scale: 300 degrees (from memory).
+fn scale_flags_at_9_and_100_percent() {
+    // Below 10 % of full scale is low accuracy; at or above 100 % the dial is pegged (common
+    // practice, no source). Standard full scale: 300 degrees (from memory).
     let g = Geometry::StandardSixSpeed;
     let out = convert(
         &g,
-        &readings(&[(3.0, 27.0), (6.0, 30.0), (300.0, 300.0), (600.0, 303.0)]),
+        &readings(&[
+            (3.0, 27.0),
+            (6.0, 30.0),
+            (200.0, 299.5),
+            (300.0, 300.0),
+            (600.0, 303.0),
+        ]),
     )
     .unwrap();
     assert!(out[0].flags.contains(&ReadingFlag::LowScale));
     assert!(!out[1].flags.contains(&ReadingFlag::LowScale));
     assert!(!out[2].flags.contains(&ReadingFlag::OffScale));
     assert!(out[3].flags.contains(&ReadingFlag::OffScale));
+    assert!(out[4].flags.contains(&ReadingFlag::OffScale));
     assert_eq!(
         ReadingFlag::GapNotFullySheared.code(),
         "gap-not-fully-sheared"

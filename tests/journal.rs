@@ -191,10 +191,20 @@ fn torn_tail_is_reported_by_load_and_set_aside_by_resume() {
     assert_eq!(side.to_str().unwrap(), format!("{}.torn-1", path.display()));
     assert_eq!(std::fs::read(&side).unwrap(), fragment);
     assert!(torn.to_string().contains("moved to"), "{torn}");
-    assert_eq!(file_len(&path), good_len);
-    assert_eq!(resumed.writer.append(None, Payload::SessionEnd).unwrap(), 5);
+    // Cut back to the good part, then the session-resumed record (5): no end record before.
     let after = load(&path).unwrap();
-    assert_eq!((after.records.len(), after.torn), (5, None));
+    assert_eq!(after.records.len(), 5);
+    assert!(file_len(&path) > good_len);
+    assert_eq!(
+        after.records[4].payload,
+        Payload::SessionResumed {
+            previous_end: PreviousEnd::NoEndRecord
+        }
+    );
+    assert_eq!(resumed.loaded.records.last(), after.records.last());
+    assert_eq!(resumed.writer.append(None, Payload::SessionEnd).unwrap(), 6);
+    let after = load(&path).unwrap();
+    assert_eq!((after.records.len(), after.torn), (6, None));
 }
 
 #[test]

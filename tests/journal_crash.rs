@@ -203,8 +203,16 @@ fn killed_at_random_moments_it_never_loses_a_record_it_reported() {
             lost.is_empty(),
             "round {round}: printed but not in the journal: {lost:?}"
         );
+        // Each run opens with a session-resumed record and, if it got that far, ends with a
+        // session-end record; everything between is a reading.
         for r in &loaded.records[1..] {
-            assert!(matches!(r.payload, Payload::Reading { .. }), "{r:?}");
+            assert!(
+                matches!(
+                    r.payload,
+                    Payload::Reading { .. } | Payload::SessionEnd | Payload::SessionResumed { .. }
+                ),
+                "{r:?}"
+            );
         }
     }
     // One clean run recovers whatever tail is left; then nothing is torn.
@@ -266,13 +274,24 @@ fn two_writers_on_separate_files_in_one_folder_do_not_mix() {
     assert_eq!(files.len(), 2, "{files:?}");
     for f in files {
         let loaded = load(&f).unwrap();
-        assert_eq!((loaded.records.len(), loaded.torn), (121, None));
-        let tags: BTreeSet<String> = loaded.records[1..].iter().map(reading_tag).collect();
+        // Start, 120 readings, end: a one-shot `record` run closes its session.
+        assert_eq!((loaded.records.len(), loaded.torn), (122, None));
+        assert!(matches!(loaded.records[121].payload, Payload::SessionEnd));
+        let tags: BTreeSet<String> = readings_of(&loaded.records).map(reading_tag).collect();
         assert_eq!(tags.len(), 1, "one writer per file: {tags:?}");
     }
 }
 
 /// The part of the raw text before the dot: which writer wrote the reading.
+/// The reading records only (not start, end or resumed).
+fn readings_of(
+    records: &[rheoside::journal::Record],
+) -> impl Iterator<Item = &rheoside::journal::Record> {
+    records
+        .iter()
+        .filter(|r| matches!(r.payload, Payload::Reading { .. }))
+}
+
 fn reading_tag(r: &rheoside::journal::Record) -> String {
     match &r.payload {
         Payload::Reading { raw, .. } => raw.split('.').next().unwrap().to_string(),
@@ -327,9 +346,12 @@ fn a_second_writer_on_the_same_file_is_refused_and_nothing_interleaves() {
     }
     let loaded = load(&path).unwrap();
     assert_eq!(loaded.torn, None);
-    assert_eq!(loaded.records.len(), 2 + printed.len());
+    assert_eq!(readings_of(&loaded.records).count(), 1 + printed.len());
     // Each writer's readings form one unbroken run: no interleaving.
-    let tags: Vec<String> = loaded.records[2..].iter().map(reading_tag).collect();
+    let tags: Vec<String> = readings_of(&loaded.records)
+        .skip(1)
+        .map(reading_tag)
+        .collect();
     let runs = 1 + tags.windows(2).filter(|w| w[0] != w[1]).count();
     assert!(
         !tags.is_empty() && runs <= 2 && tags.len().is_multiple_of(80),

@@ -255,6 +255,7 @@ fn json_keeps_its_documented_keys() {
             "readings",
             "records",
             "results",
+            "resumptions",
             "session",
             "sets",
             "site_id",

@@ -357,7 +357,8 @@ fn a_resumed_session_shows_its_last_set_and_appends_to_the_same_file() {
         "--operator",
         "day",
     ]);
-    s.wait_for_all(&["Herschel–Bulkley (auto)", "Session resumed with 4 records"]);
+    // Four records of the first run, then the session-resumed record written on resume.
+    s.wait_for_all(&["Herschel–Bulkley (auto)", "Session resumed with 5 records"]);
     s.send("nhandover: sauce thickening\r");
     s.wait_for("Note sent to the journal");
     s.wait_for("journal saved");
@@ -377,6 +378,7 @@ fn a_resumed_session_shows_its_last_set_and_appends_to_the_same_file() {
             ("viscometer-set", "night"),
             ("result", "night"),
             ("session-end", "night"),
+            ("session-resumed", "day"),
             ("note", "day"),
             ("session-end", "day"),
         ]

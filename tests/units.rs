@@ -269,7 +269,7 @@ fn refusals_say_what_is_wrong_and_what_is_accepted() {
         ("150 %", D::Fraction, "'150 %': a fraction must be between 0 and 1 (or 0 % to 100 %); for a percentage type e.g. '85 %'".into()),
         ("5 kg", D::Fraction, "'5 kg': unknown unit 'kg' for a fraction; accepted: a bare number 0-1, %".into()),
         ("20 °", D::Temperature, "'20 °': unknown unit '°' for a temperature; accepted: °C, °F, K".into()),
-        ("30 psig", D::Flow, "'30 psig' is a pressure, but a flow is expected here; accepted: m3/h, m3/s, L/s, L/min, gpm, bbl/min".into()),
+        ("30 psig", D::Flow, "'30 psig' is a pressure, but a flow is expected here; accepted: m3/h, m3/s, L/s, L/min, gpm (US gallons per minute), igpm (imperial gallons per minute), bbl/min".into()),
         ("100 rad/s", D::ShearRate, "'100 rad/s' is a speed, but a shear rate is expected here; accepted: 1/s, s-1".into()),
         ("3 kW", D::Stress, format!("'3 kW' is a power, but a shear stress is expected here; accepted: {pressure}")),
     ];

@@ -19,11 +19,11 @@ pub struct Cli {
     pub resume: Option<PathBuf>,
 
     /// Folder for session journals (default: logs/, or RHEOSIDE_LOG_DIR).
-    #[arg(long, global = true, value_name = "DIR", env = "RHEOSIDE_LOG_DIR")]
+    #[arg(long, value_name = "DIR", env = "RHEOSIDE_LOG_DIR")]
     pub log_dir: Option<PathBuf>,
 
     /// Operator name for the journal (default: the OS user).
-    #[arg(long, global = true)]
+    #[arg(long)]
     pub operator: Option<String>,
 
     /// Plain ASCII borders and chart marks, for terminals without line drawing.
@@ -34,22 +34,31 @@ pub struct Cli {
 #[derive(Debug, Subcommand)]
 pub enum Command {
     /// Fit flow curves to viscometer readings from a CSV file.
+    #[command(after_help = super::examples::FIT)]
     Fit(FitArgs),
     /// Validate a site config and print a summary of its equipment.
+    #[command(after_help = super::examples::CHECK_SITE)]
     CheckSite(CheckSiteArgs),
     /// Append readings or a note to a session journal (headless).
+    #[command(after_help = super::examples::RECORD)]
     Record(RecordArgs),
     /// Shift handover report from one or more journals.
+    #[command(after_help = super::examples::REPORT)]
     Report(ReportArgs),
     /// A product's fitted constants over past sessions, against its spec limits.
+    #[command(after_help = super::examples::TREND)]
     Trend(TrendArgs),
     /// Power, torque and caverns for an agitated tank; viscosity from a motor reading.
+    #[command(after_help = super::examples::MIX)]
     Mix(Box<super::mix::args::MixArgs>),
     /// Pressure drop in a line for a flow, or the flow for a pressure drop.
+    #[command(after_help = super::examples::LINE)]
     Line(Box<super::line_args::LineArgs>),
     /// Will a line restart after a stop, and the longest safe stop (gel build-up at rest).
+    #[command(after_help = super::examples::RESTART)]
     Restart(super::restart::RestartArgs),
     /// A pump on a viscous product: ANSI/HI 9.6.7 correction, duty point, PD slip and relief.
+    #[command(after_help = super::examples::PUMP)]
     Pump(super::pump::PumpArgs),
 }
 
@@ -87,9 +96,14 @@ pub struct FitArgs {
     /// Use the Newtonian (Margules) shear rate instead of the n-corrected one.
     #[arg(long)]
     pub no_rate_correction: bool,
-    /// `relative` weights each point by 1/stress, for data spanning decades.
+    /// `none` (default), `relative` (each point by 1/stress, for data spanning decades) or
+    /// `log` (least squares on ln stress, as published constants are usually fitted).
     #[arg(long, value_name = "WEIGHT")]
     pub weight: Option<String>,
+    /// Keep readings at or above full scale (pegged dial) in the fit; by default they are
+    /// left out and listed.
+    #[arg(long)]
+    pub include_off_scale: bool,
     /// One JSON object on stdout, SI units.
     #[arg(long)]
     pub json: bool,
@@ -117,6 +131,12 @@ pub struct RecordArgs {
     /// Append to this session file instead of starting a new one.
     #[arg(long, value_name = "FILE")]
     pub session: Option<PathBuf>,
+    /// Folder for the new session's journal (default: logs/, or RHEOSIDE_LOG_DIR).
+    #[arg(long, value_name = "DIR", env = "RHEOSIDE_LOG_DIR")]
+    pub log_dir: Option<PathBuf>,
+    /// Operator name for the journal (default: the OS user).
+    #[arg(long)]
+    pub operator: Option<String>,
 }
 
 #[derive(Debug, Args)]
@@ -137,4 +157,36 @@ pub struct TrendArgs {
     /// How far back, e.g. 30d, 12h, 8w.
     #[arg(long, default_value = "30d")]
     pub since: String,
+    /// Property to chart: consistency-index (k), flow-index (n), yield-stress (tau0) or
+    /// apparent-viscosity (mu-a). Default: each property the product has a limit on.
+    #[arg(long, value_name = "NAME")]
+    pub property: Option<String>,
+    /// Folder of session journals to read (default: logs/, or RHEOSIDE_LOG_DIR).
+    #[arg(long, value_name = "DIR", env = "RHEOSIDE_LOG_DIR")]
+    pub log_dir: Option<PathBuf>,
+}
+
+impl RecordArgs {
+    /// The journal folder: this subcommand's option, else one given before the subcommand.
+    pub fn log_dir(&self, cli: &Cli) -> PathBuf {
+        either_log_dir(&self.log_dir, cli)
+    }
+
+    /// The operator: this subcommand's option, else one given before the subcommand.
+    pub fn operator<'a>(&'a self, cli: &'a Cli) -> Option<&'a str> {
+        self.operator.as_deref().or(cli.operator.as_deref())
+    }
+}
+
+impl TrendArgs {
+    /// The journal folder: this subcommand's option, else one given before the subcommand.
+    pub fn log_dir(&self, cli: &Cli) -> PathBuf {
+        either_log_dir(&self.log_dir, cli)
+    }
+}
+
+fn either_log_dir(own: &Option<PathBuf>, cli: &Cli) -> PathBuf {
+    own.clone()
+        .or_else(|| cli.log_dir.clone())
+        .unwrap_or_else(|| PathBuf::from("logs"))
 }

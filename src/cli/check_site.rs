@@ -19,10 +19,7 @@ pub fn run(_cli: &Cli, args: &CheckSiteArgs) -> anyhow::Result<ExitCode> {
             writeln!(err, "{errors}")?;
             let n = errors.0.len();
             let noun = if n == 1 { "error" } else { "errors" };
-            writeln!(
-                err,
-                "rheoside: {n} {noun} in the site config; nothing was changed"
-            )?;
+            writeln!(err, "rheoside: {n} {noun} in the site config")?;
             Ok(ExitCode::from(EXIT_BAD_INPUT))
         }
     }

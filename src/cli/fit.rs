@@ -6,6 +6,7 @@ use super::fit_output;
 use crate::instrument::Geometry;
 use crate::present::Style;
 use crate::rheology::Weighting;
+use crate::session::checks::OffScale;
 use crate::session::temperature::{TemperatureSeries, analyse_by_temperature};
 use crate::session::{self, FlowCurveInput, FlowCurveOptions, ModelPick};
 use crate::site::Site;
@@ -18,7 +19,7 @@ pub fn run(cli: &Cli, args: &FitArgs) -> Result<ExitCode> {
         return Ok(code);
     }
     let opts = options(args)?;
-    let site = load_site(cli)?;
+    let site = load_site(cli, args)?;
     let data = fit_csv::read(&args.file)?;
     let geometry = match &data.readings {
         Readings::Dial(_) => Some(geometry(args, site.as_ref())?),
@@ -93,19 +94,30 @@ pub(super) fn options(args: &FitArgs) -> Result<FlowCurveOptions> {
     let weighting = match args.weight.as_deref() {
         None | Some("none") => Weighting::Unweighted,
         Some("relative") => Weighting::Relative,
-        Some(other) => bail!("--weight '{other}': accepted values are 'relative' or 'none'"),
+        Some("log") => Weighting::Log,
+        Some(other) => bail!(
+            "--weight '{}': accepted values are 'none', 'relative' or 'log'",
+            crate::text::sanitize(other, false)
+        ),
     };
     Ok(FlowCurveOptions {
         model,
         rate_correction: !args.no_rate_correction,
         weighting,
+        off_scale: if args.include_off_scale {
+            OffScale::Include
+        } else {
+            OffScale::LeaveOut
+        },
     })
 }
 
-fn load_site(cli: &Cli) -> Result<Option<Site>> {
-    match &cli.site {
-        None => Ok(None),
-        Some(path) => crate::site::load_or_demo(Some(path))
+/// The site given, or the bundled demo site when a viscometer is named without one (as
+/// `--site`'s help promises); no site at all for a plain `--geometry` fit.
+fn load_site(cli: &Cli, args: &FitArgs) -> Result<Option<Site>> {
+    match (&cli.site, &args.viscometer) {
+        (None, None) => Ok(None),
+        (path, _) => crate::site::load_or_demo(path.as_deref())
             .map(Some)
             .map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}")),
     }
@@ -127,7 +139,7 @@ fn geometry(args: &FitArgs, site: Option<&Site>) -> Result<Geometry> {
                     )
                 })
         }
-        (None, Some(_), None) => bail!("--viscometer needs --site FILE to look the viscometer up"),
+        (None, Some(_), None) => bail!("--viscometer needs a site config to look it up in"),
         (Some(_), Some(_), _) => bail!("give either --geometry or --viscometer, not both"),
         (None, None, _) => bail!(
             "rpm/dial readings need a geometry: --geometry standard-six-speed, or --site FILE --viscometer ID"

@@ -38,7 +38,7 @@ pub fn parse(text: &str) -> Result<CsvData> {
     let mut temps = Vec::new();
     for (i, record) in reader.records().enumerate() {
         let line = i + 2;
-        let record = record.with_context(|| format!("line {line}: not a valid CSV row"))?;
+        let record = record.map_err(|e| row_error(&e, line, headers.len()))?;
         first.push(number(&record, layout.first, line, &headers)?);
         second.push(number(&record, layout.second, line, &headers)?);
         if let Some(col) = layout.temperature {
@@ -85,6 +85,17 @@ struct Layout {
 impl Layout {
     fn from_headers(headers: &[String]) -> Result<Layout> {
         let find = |name: &str| headers.iter().position(|h| h == name);
+        if let Some((i, h)) = headers
+            .iter()
+            .enumerate()
+            .find(|(i, h)| headers[..*i].contains(h))
+        {
+            bail!(
+                "column '{h}' appears twice (columns {} and {}); give each column once",
+                headers.iter().position(|x| x == h).map_or(0, |p| p + 1),
+                i + 1
+            );
+        }
         let temperature = find("temperature");
         if let Some(unknown) = headers.iter().find(|h| {
             !matches!(
@@ -117,6 +128,17 @@ impl Layout {
                 headers.join(",")
             ),
         }
+    }
+}
+
+/// A row with the wrong number of cells is usually a decimal comma ("600,12,5").
+fn row_error(e: &csv::Error, line: usize, columns: usize) -> anyhow::Error {
+    match e.kind() {
+        csv::ErrorKind::UnequalLengths { len, .. } => anyhow::anyhow!(
+            "line {line}: {len} cells where the header has {columns}; a comma separates \
+             cells and cannot be a decimal point: write 12.5, not 12,5"
+        ),
+        _ => anyhow::anyhow!("line {line}: not a valid CSV row ({e})"),
     }
 }
 
@@ -195,6 +217,25 @@ mod tests {
             err,
             "line 3, column 'dial': 'abc' is not a number (use a plain decimal such as 12.5)"
         );
+    }
+
+    // Regressions: a repeated column silently used the first; a decimal comma gave only
+    // "not a valid CSV row".
+    #[test]
+    fn repeated_columns_and_decimal_commas_are_named() {
+        let err = parse("rpm,dial,dial\n600,52,53\n").unwrap_err().to_string();
+        assert!(
+            err.contains("column 'dial' appears twice (columns 2 and 3)"),
+            "{err}"
+        );
+        let err = parse("rpm,dial\n600,52\n600,12,5\n")
+            .unwrap_err()
+            .to_string();
+        assert!(
+            err.starts_with("line 3: 3 cells where the header has 2"),
+            "{err}"
+        );
+        assert!(err.contains("cannot be a decimal point"), "{err}");
     }
 
     #[test]

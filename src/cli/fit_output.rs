@@ -42,6 +42,7 @@ pub fn table(curve: &FlowCurve, style: Style, temperature_k: Option<f64>) -> Str
     let _ = writeln!(out, "{}", quality_line(fit, style));
     out.push_str(&candidates_table(curve));
     out.push_str(&points_table(curve, style));
+    out.push_str(&super::fit_extra::sections(curve, style));
     for w in &curve.warnings {
         let _ = writeln!(out, "  ! {w}");
     }
@@ -95,11 +96,11 @@ fn points_table(curve: &FlowCurve, style: Style) -> String {
         "    {:>3} {:>7} {:>7} {:>15} {:>15} {:>15}  flags",
         "#", "rpm", "dial", "Newtonian rate", "rate used", "stress"
     );
-    for (i, p) in curve.points.iter().enumerate() {
+    for p in &curve.points {
         let opt = |v: Option<f64>| v.map_or("—".to_string(), significant);
         let row = format!(
             "    {:>3} {:>7} {:>7} {:>15} {:>15} {:>15}  {}",
-            i + 1,
+            p.row,
             opt(p.rpm),
             opt(p.dial),
             present::quantity(p.newtonian_shear_rate_per_s, Dimension::ShearRate, style),

@@ -4,8 +4,10 @@
 
 mod args;
 mod check_site;
+mod examples;
 mod fit;
 mod fit_csv;
+mod fit_extra;
 mod fit_output;
 mod fit_pipe;
 mod fit_pipe_output;

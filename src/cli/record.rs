@@ -1,18 +1,20 @@
 //! The `record` subcommand: headless append of readings and a note, for scripts and handhelds.
 //!
 //! Everything is checked before anything is written (exit 2, nothing written). Then one
-//! record per reading, then the note; each record's sequence number is printed on stdout
-//! only after its fsync has returned, so a script can trust every number it saw.
+//! record per reading, then the note, then a session-end record: each `record` run is one
+//! complete run of the session, so a report never calls it a crash. Each record's sequence
+//! number is printed on stdout only after its fsync has returned, so a script can trust
+//! every number it saw.
 
 use super::args::{Cli, RecordArgs};
 use crate::journal::{
-    JournalError, JournalWriter, NewSession, Payload, Resumed, SystemClock, os_user,
+    JournalError, JournalWriter, NewSession, Payload, Resumed, Severity, SystemClock, os_user,
 };
-use crate::readings::parse_reading_arg;
+use crate::readings::parse_reading_arg_at;
 use crate::site::Site;
 use anyhow::bail;
 use std::io::Write;
-use std::path::{Path, PathBuf};
+use std::path::Path;
 use std::process::ExitCode;
 
 /// The journal could not be opened or a record could not be saved: worth retrying
@@ -53,6 +55,13 @@ pub fn run(cli: &Cli, args: &RecordArgs) -> anyhow::Result<ExitCode> {
             return Ok(not_saved(&e, unsaved));
         }
     }
+    // Its number is not printed: scripts count the records they asked for.
+    if let Err(e) = writer.end_session() {
+        eprintln!(
+            "rheoside: {e}; the readings are saved, but the session-end record is not, so a \
+             report will show this run as not closed"
+        );
+    }
     Ok(ExitCode::SUCCESS)
 }
 
@@ -66,8 +75,17 @@ fn check(cli: &Cli, args: &RecordArgs) -> anyhow::Result<Plan> {
     let mut payloads = Vec::new();
     let mut errors = Vec::new();
     for text in &args.readings {
-        match parse_reading_arg(text) {
-            Ok(r) => payloads.push(r.payload()),
+        match parse_reading_arg_at(text, site.atmospheric_pressure_pa) {
+            Ok(r) => {
+                payloads.push(r.payload());
+                if let Some(text) = r.conversion_note() {
+                    // Said in the journal beside the reading, not only on the terminal.
+                    payloads.push(Payload::Finding {
+                        severity: Severity::Info,
+                        text,
+                    });
+                }
+            }
             Err(e) => errors.push(format!("--reading: {e}")),
         }
     }
@@ -84,7 +102,7 @@ fn check(cli: &Cli, args: &RecordArgs) -> anyhow::Result<Plan> {
     if !errors.is_empty() {
         bail!("nothing was written:\n  {}", errors.join("\n  "));
     }
-    let operator = match &cli.operator {
+    let operator = match args.operator(cli) {
         Some(o) => crate::text::sanitize(o, false),
         None => os_user(),
     };
@@ -127,7 +145,7 @@ fn open(cli: &Cli, args: &RecordArgs, plan: &Plan) -> Result<JournalWriter, Open
     let clock = Box::new(SystemClock);
     let Some(path) = &args.session else {
         let new = NewSession {
-            log_dir: cli.log_dir.clone().unwrap_or_else(|| PathBuf::from("logs")),
+            log_dir: args.log_dir(cli),
             site_id: plan.site.id.clone(),
             site_source: plan.site_source.clone(),
             operator: plan.operator.clone(),
@@ -138,20 +156,25 @@ fn open(cli: &Cli, args: &RecordArgs, plan: &Plan) -> Result<JournalWriter, Open
         }
         return Ok(writer);
     };
+    // The site is checked on a read-only look first: resuming writes a record.
+    let peek = crate::journal::load(path).map_err(classify)?;
+    if let Some(id) = peek.site_id()
+        && id != plan.site.id
+    {
+        return Err(Opening::Refused(anyhow::anyhow!(
+            "session file {} belongs to site '{}', not '{}'; give the matching --site, \
+             or leave out --session to start a new session; nothing was written",
+            path.display(),
+            crate::text::sanitize(id, false),
+            plan.site.id
+        )));
+    }
     let Resumed { writer, loaded } =
         JournalWriter::resume(path, &plan.operator, clock).map_err(classify)?;
     if let Some(torn) = &loaded.torn {
         eprintln!("rheoside: {}: {torn}", path.display());
     }
-    match loaded.site_id() {
-        Some(id) if id != plan.site.id => Err(Opening::Refused(anyhow::anyhow!(
-            "session file {} belongs to site '{id}', not '{}'; give the matching --site, \
-             or leave out --session to start a new session; nothing was written",
-            path.display(),
-            plan.site.id
-        ))),
-        _ => Ok(writer),
-    }
+    Ok(writer)
 }
 
 fn classify(e: JournalError) -> Opening {

@@ -13,7 +13,7 @@ pub const LOW_SCALE_FRACTION: f64 = 0.10;
 pub enum ReadingFlag {
     /// Below 10 % of full scale.
     LowScale,
-    /// Above 100 % of full scale.
+    /// At or above 100 % of full scale: the dial is pegged.
     OffScale,
     /// Stress at the cup below the yield stress: part of the gap is not sheared.
     GapNotFullySheared,
@@ -42,8 +42,8 @@ impl ReadingFlag {
                 "below 10 % of full scale: low accuracy; use a softer spring or a larger bob"
             }
             ReadingFlag::OffScale => {
-                "above full scale: the reading is not valid; use a lower speed, a stiffer \
-                 spring or a smaller bob"
+                "at or above full scale (pegged): the reading only says 'at least this much'; \
+                 use a lower speed, a stiffer spring or a smaller bob"
             }
             ReadingFlag::GapNotFullySheared => {
                 "stress at the cup is below the yield stress, so part of the gap does not \
@@ -67,7 +67,8 @@ pub(crate) fn scale_flags(dial: f64, full_scale: f64) -> Vec<ReadingFlag> {
     if dial < LOW_SCALE_FRACTION * full_scale {
         flags.push(ReadingFlag::LowScale);
     }
-    if dial > full_scale {
+    // At full scale the needle is pegged: it cannot show whether the stress is higher.
+    if dial >= full_scale {
         flags.push(ReadingFlag::OffScale);
     }
     flags

@@ -79,6 +79,7 @@ pub(crate) fn payload(p: Payload) -> Result<Payload, JournalError> {
             text: prose(&text),
         },
         Payload::SessionEnd => Payload::SessionEnd,
+        resumed @ Payload::SessionResumed { .. } => resumed,
     })
 }
 

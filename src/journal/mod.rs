@@ -15,6 +15,7 @@ mod open;
 mod reader;
 mod record;
 mod recover;
+mod run_end;
 mod sink;
 mod writer;
 
@@ -25,5 +26,6 @@ pub use naming::{new_session_id, os_user, session_file_name, site_file_stem};
 pub use open::{NewSession, Resumed};
 pub use reader::{Loaded, TornTail, load};
 pub use record::{DialRow, Payload, Record, ResultKind, Severity};
+pub use run_end::PreviousEnd;
 pub use sink::{FileSink, Sink};
 pub use writer::{Continuation, JournalWriter};

@@ -7,6 +7,7 @@ use super::naming::{new_session_id, session_file_name};
 use super::reader::{Loaded, scan};
 use super::record::Payload;
 use super::recover::set_aside;
+use super::run_end::PreviousEnd;
 use super::sink::{FileSink, sync_dir};
 use super::writer::{Continuation, JournalWriter};
 use std::fs::File;
@@ -68,7 +69,9 @@ impl JournalWriter<FileSink> {
     }
 
     /// Lock an existing session file, set aside a cut-off last line, and continue the same
-    /// session with the next sequence number.
+    /// session with the next sequence number. A session-resumed record saying how the
+    /// previous run ended (cleanly, or with no end record) is saved first; it is the last of
+    /// `loaded.records`.
     pub fn resume(
         path: &Path,
         operator: &str,
@@ -96,6 +99,13 @@ impl JournalWriter<FileSink> {
         };
         let mut writer = JournalWriter::with_sink(FileSink::new(file), from, clock);
         writer.set_path(path.to_path_buf());
+        // Say how the previous run ended before anything else is added, so a report shows a
+        // kill or a power loss instead of running the two runs together.
+        let previous_end = PreviousEnd::of(&loaded.records);
+        writer.append(None, Payload::SessionResumed { previous_end })?;
+        if let Some(record) = writer.last_saved.take() {
+            loaded.records.push(record);
+        }
         Ok(Resumed { writer, loaded })
     }
 }

@@ -80,6 +80,10 @@ pub enum Payload {
         text: String,
     },
     SessionEnd,
+    /// The session was picked up again (after a clean end or none); `previous_end` says which.
+    SessionResumed {
+        previous_end: super::run_end::PreviousEnd,
+    },
 }
 
 /// One viscometer row: speed in rev/min and the dial reading, each with the text typed.
@@ -124,6 +128,7 @@ impl Payload {
             Payload::Note { .. } => "note",
             Payload::Finding { .. } => "finding",
             Payload::SessionEnd => "session-end",
+            Payload::SessionResumed { .. } => "session-resumed",
         }
     }
 }

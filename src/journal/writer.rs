@@ -42,6 +42,8 @@ pub struct JournalWriter<S: Sink = FileSink> {
     dirty: bool,
     /// Records numbered since the last [`JournalWriter::take_numbered`], saved or not yet.
     numbered: Vec<Record>,
+    /// The record most recently saved (kept so a resume can hand its own record back).
+    pub(crate) last_saved: Option<Record>,
 }
 
 impl<S: Sink> JournalWriter<S> {
@@ -59,6 +61,7 @@ impl<S: Sink> JournalWriter<S> {
             pending: VecDeque::new(),
             dirty: false,
             numbered: Vec::new(),
+            last_saved: None,
         }
     }
 
@@ -147,7 +150,7 @@ impl<S: Sink> JournalWriter<S> {
         self.dirty = false;
         self.good_len += p.line.len() as u64;
         self.saved_through = seq;
-        self.pending.pop_front();
+        self.last_saved = self.pending.pop_front().map(|p| p.record);
         Ok(())
     }
 

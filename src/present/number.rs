@@ -124,6 +124,14 @@ fn tidy(text: String) -> String {
 mod tests {
     use super::*;
 
+    // A negative R² (a flat-set Newtonian fit printed "-114.1360") is said in words.
+    #[test]
+    fn negative_r_squared_is_never_a_number() {
+        assert_eq!(r_squared(-114.136), "worse than a flat line");
+        assert_eq!(r_squared(0.427), "0.4270");
+        assert_eq!(r_squared(f64::NAN), "not available");
+    }
+
     // The rule: uncertainty to two significant figures, value to the same decimal place
     // (the convention of the GUM, JCGM 100:2008 §7.2.6, as commonly applied).
     #[test]

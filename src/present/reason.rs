@@ -13,7 +13,21 @@ pub fn for_curve(curve: &FlowCurve, style: Style) -> String {
         (Why::Rule, Some(choice)) => explain(choice, style),
         (Why::Rule, None) => format!("{} fitted", curve.fit.model.kind().title()),
     };
-    style.text(&text)
+    style.text(&with_fit_caveat(text, curve))
+}
+
+/// A poor fit undermines both the choice and the constants: say so after the reason.
+fn with_fit_caveat(mut text: String, curve: &FlowCurve) -> String {
+    if !curve.fit_is_poor() {
+        return text;
+    }
+    if !text.ends_with('.') {
+        text.push('.');
+    }
+    text.push_str(
+        " The fit is poor (R² below 0.9), so neither the choice nor the constants can be relied on.",
+    );
+    text
 }
 
 fn by_hand(kind: ModelKind, rule_would: Option<ModelKind>) -> String {

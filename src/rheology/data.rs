@@ -19,7 +19,16 @@ impl Point {
     }
 }
 
-/// Check every reading (finite, above zero); readings are numbered from 1 in messages.
+/// Largest shear stress taken as a plant reading, Pa: 1 GPa is far above any paste, gel or
+/// slurry, and beyond it the arithmetic of the fits loses its meaning (common practice, no
+/// source).
+pub const MAX_PLANT_STRESS_PA: f64 = 1e9;
+/// Largest shear rate taken as a plant reading, 1/s: spraying and coating reach about 1e5–1e6
+/// (common practice, no source).
+pub const MAX_PLANT_SHEAR_RATE_PER_S: f64 = 1e7;
+
+/// Check every reading (finite, above zero, within plant sense); readings are numbered from 1
+/// in messages.
 pub(crate) fn check_points(points: &[Point]) -> Result<(), FitError> {
     if points.is_empty() {
         return Err(FitError::NoPoints);
@@ -52,6 +61,30 @@ pub(crate) fn check_points(points: &[Point]) -> Result<(), FitError> {
                 value: p.shear_stress,
             });
         }
+        check_plant_range(index, p)?;
+    }
+    Ok(())
+}
+
+fn check_plant_range(index: usize, p: &Point) -> Result<(), FitError> {
+    let beyond = |field, value, limit, unit| FitError::BeyondPlantRange {
+        index,
+        field,
+        value,
+        limit,
+        unit,
+    };
+    if p.shear_stress > MAX_PLANT_STRESS_PA {
+        return Err(beyond(
+            "shear stress",
+            p.shear_stress,
+            MAX_PLANT_STRESS_PA,
+            "Pa",
+        ));
+    }
+    if p.shear_rate > MAX_PLANT_SHEAR_RATE_PER_S {
+        let limit = MAX_PLANT_SHEAR_RATE_PER_S;
+        return Err(beyond("shear rate", p.shear_rate, limit, "1/s"));
     }
     Ok(())
 }

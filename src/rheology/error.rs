@@ -62,6 +62,23 @@ pub enum FitError {
     NotConverged { model: ModelKind, iterations: usize },
     #[error("the {} fit gives a result with no physical meaning: {detail}", .model.title())]
     NotPhysical { model: ModelKind, detail: String },
+    #[error(
+        "the {} fit's quality figures (R², RMSE) are not finite numbers, so the fit cannot be \
+         judged; check the readings' units and look for a stray value",
+        .model.title()
+    )]
+    QualityNotFinite { model: ModelKind },
+    #[error(
+        "reading {index}: {field} {value:e} {unit} is beyond what a plant measures (at most \
+         {limit:e} {unit}); check the units and the reading"
+    )]
+    BeyondPlantRange {
+        index: usize,
+        field: &'static str,
+        value: f64,
+        limit: f64,
+        unit: &'static str,
+    },
     #[error("no model could be compared: {detail}")]
     NoComparableModel { detail: String },
     #[error(

@@ -91,7 +91,8 @@ pub(crate) fn normal<C: Curve>(c: &C, d: &Data, beta: &Vec3) -> Normal {
     n
 }
 
-fn ssr_at<C: Curve>(c: &C, d: &Data, beta: &Vec3) -> f64 {
+/// The weighted SSR at β.
+pub(crate) fn ssr_at<C: Curve>(c: &C, d: &Data, beta: &Vec3) -> f64 {
     d.rows()
         .map(|(x, lx, y, w)| (w * (y - c.eval(beta, x, lx).0)).powi(2))
         .sum()

@@ -37,14 +37,24 @@ pub fn fit_power_law_log(points: &[Point]) -> Result<LogPowerLaw, FitError> {
         have: 1,
         need: 2,
     })?;
+    let (k, n) = (line.intercept.exp(), line.slope);
+    if !(k.is_finite() && k > 0.0 && n.is_finite() && n > 0.0) {
+        return Err(FitError::NotPhysical {
+            model: ModelKind::PowerLaw,
+            detail: format!(
+                "the log–log line gives K = {k} Pa·sⁿ and n = {n}, not finite values above \
+                 zero; the stress does not rise with shear rate in these readings"
+            ),
+        });
+    }
     let t = t975(line.dof());
     let se_n = line.se_slope();
     let se_ln_k = line.se_intercept();
     let interval = |v: f64, se: Option<f64>| t.zip(se).map(|(t, se)| (v - t * se, v + t * se));
     let ln_k_ci = interval(line.intercept, se_ln_k);
     Ok(LogPowerLaw {
-        k: line.intercept.exp(),
-        n: line.slope,
+        k,
+        n,
         se_n,
         se_ln_k,
         n_ci95: interval(line.slope, se_n),

@@ -19,7 +19,7 @@ pub mod stats;
 pub mod temperature;
 
 pub use choose::{Candidate, Choice, StepDown, choose};
-pub use data::Point;
+pub use data::{MAX_PLANT_SHEAR_RATE_PER_S, MAX_PLANT_STRESS_PA, Point};
 pub use error::{FitError, NoCi};
 pub use fit::{Estimate, Fit, FitOptions, Weighting, fit};
 pub use kind::{ModelKind, ParamName};

@@ -18,8 +18,21 @@ use super::kind::ParamName;
 use super::levenberg::Data;
 use statrs::distribution::{ContinuousCDF, StudentsT};
 
-/// Student t quantile t(0.975, dof); `None` for zero degrees of freedom.
+/// Degrees of freedom whose quantile is kept after first use (every plant set is smaller).
+const T975_CACHED: usize = 64;
+
+/// Student t quantile t(0.975, dof); `None` for zero degrees of freedom. The quantile is an
+/// iterative inverse of the incomplete beta function, a noticeable share of a fit's time, so
+/// small dof are computed once per process.
 pub fn t975(dof: usize) -> Option<f64> {
+    static TABLE: std::sync::OnceLock<[Option<f64>; T975_CACHED]> = std::sync::OnceLock::new();
+    if dof < T975_CACHED {
+        return TABLE.get_or_init(|| std::array::from_fn(t975_computed))[dof];
+    }
+    t975_computed(dof)
+}
+
+fn t975_computed(dof: usize) -> Option<f64> {
     if dof == 0 {
         return None;
     }

@@ -1,5 +1,9 @@
 //! Viscometer readings (or rate/stress points) to a fitted flow curve with its evidence.
 
+use super::api_rp13d::{ApiRp13d, field_relations};
+use super::checks::{Concern, LeftOut, OffScale};
+use super::off_scale::select;
+use super::points::{describe_points, flag_warnings};
 use crate::instrument::{self, Converted, DialReading, Geometry, InstrumentError};
 use crate::rheology::{self, Choice, Fit, FitError, FitOptions, ModelKind, Point, Weighting};
 
@@ -40,6 +44,8 @@ pub struct FlowCurveOptions {
     /// Use the n-corrected bob shear rate (true) or the Newtonian one (false).
     pub rate_correction: bool,
     pub weighting: Weighting,
+    /// Whether pegged readings (dial at or above full scale) take part.
+    pub off_scale: OffScale,
 }
 
 impl Default for FlowCurveOptions {
@@ -48,6 +54,7 @@ impl Default for FlowCurveOptions {
             model: ModelPick::Auto,
             rate_correction: true,
             weighting: Weighting::Unweighted,
+            off_scale: OffScale::LeaveOut,
         }
     }
 }
@@ -67,6 +74,8 @@ pub enum FlowCurveInput<'a> {
 /// One measured point as it went into the fit, with its flags.
 #[derive(Debug, Clone, PartialEq)]
 pub struct PointOut {
+    /// The reading's row as given (from 1); rows left out of the fit are skipped.
+    pub row: usize,
     pub rpm: Option<f64>,
     pub dial: Option<f64>,
     pub newtonian_shear_rate_per_s: f64,
@@ -95,9 +104,22 @@ pub struct FlowCurve {
     pub why: Why,
     pub points: Vec<PointOut>,
     pub warnings: Vec<String>,
+    /// Readings that took no part in the fit (pegged dial), with their rows.
+    pub left_out: Vec<LeftOut>,
+    /// Reversed readings, a poor fit, implausible constants: as data, also in `warnings`.
+    pub concerns: Vec<Concern>,
+    /// The API RP 13D field relations, for the standard six-speed geometry with θ600 and θ300.
+    pub api_rp13d: Option<ApiRp13d>,
 }
 
 impl FlowCurve {
+    /// R² below 0.9 or worse than a flat line: the choice and constants are not to be relied on.
+    pub fn fit_is_poor(&self) -> bool {
+        self.concerns
+            .iter()
+            .any(|c| matches!(c, Concern::PoorFit { .. } | Concern::WorseThanFlat))
+    }
+
     /// Apparent viscosity τ/γ̇ of the shown model at a shear rate, Pa·s.
     pub fn apparent_viscosity_at(&self, rate_per_s: f64) -> f64 {
         self.fit.model.apparent_viscosity(rate_per_s)
@@ -106,10 +128,16 @@ impl FlowCurve {
 
 #[derive(Debug, Clone, PartialEq, thiserror::Error)]
 pub enum FlowCurveError {
-    #[error("{0}")]
+    // Transparent: the message is the inner one, said once (not again as its source).
+    #[error(transparent)]
     Reading(#[from] InstrumentError),
-    #[error("{0}")]
+    #[error(transparent)]
     Fit(#[from] FitError),
+    #[error(
+        "every reading ({count}) is at or above full scale, so none is left to fit; read \
+         again at lower speeds or with a stiffer spring, or give --include-off-scale"
+    )]
+    AllOffScale { count: usize },
 }
 
 thread_local! {
@@ -128,6 +156,39 @@ pub fn analyse(
     opts: &FlowCurveOptions,
 ) -> Result<FlowCurve, FlowCurveError> {
     CURVES_FITTED.with(|c| c.set(c.get() + 1));
+    let selection = select(input, opts.off_scale);
+    let input = match input {
+        FlowCurveInput::Dial { .. } if selection.kept.is_empty() => {
+            let count = selection.left_out.len();
+            return match count {
+                0 => Err(InstrumentError::NoReadings.into()),
+                _ => Err(FlowCurveError::AllOffScale { count }),
+            };
+        }
+        FlowCurveInput::Dial { geometry, .. } => FlowCurveInput::Dial {
+            geometry,
+            readings: &selection.kept,
+        },
+        direct => direct,
+    };
+    let mut curve = fit_selected(input, opts, &selection.rows)?;
+    super::curve_checks::apply(&mut curve, &selection.rows, input);
+    curve
+        .warnings
+        .splice(0..0, selection.left_out.iter().map(|l| l.explain()));
+    if let FlowCurveInput::Dial { geometry, readings } = input {
+        curve.api_rp13d = field_relations(geometry, readings);
+    }
+    curve.left_out = selection.left_out;
+    Ok(curve)
+}
+
+/// The fit of the readings kept, with the instrument's flags and warnings.
+fn fit_selected(
+    input: FlowCurveInput<'_>,
+    opts: &FlowCurveOptions,
+    row_numbers: &[usize],
+) -> Result<FlowCurve, FlowCurveError> {
     let mut converted = convert(input)?;
     let points = fit_points(input, converted.as_deref(), opts.rate_correction);
     let fit_opts = FitOptions {
@@ -145,7 +206,7 @@ pub fn analyse(
         }
     }
     if let Some(rows) = converted.as_deref() {
-        warnings.extend(flag_warnings(rows));
+        warnings.extend(flag_warnings(rows, row_numbers));
     }
     let points = describe_points(input, converted.as_deref(), &points);
     Ok(FlowCurve {
@@ -154,6 +215,9 @@ pub fn analyse(
         why,
         points,
         warnings,
+        left_out: Vec::new(),
+        concerns: Vec::new(),
+        api_rp13d: None,
     })
 }
 
@@ -206,62 +270,4 @@ fn pick_model(
             Ok((fit, choice, Why::ByHand { rule_would }))
         }
     }
-}
-
-fn describe_points(
-    input: FlowCurveInput<'_>,
-    converted: Option<&[Converted]>,
-    fitted: &[Point],
-) -> Vec<PointOut> {
-    match (input, converted) {
-        (_, Some(rows)) => rows
-            .iter()
-            .zip(fitted)
-            .map(|(c, p)| PointOut {
-                rpm: Some(c.rpm),
-                dial: Some(c.dial),
-                newtonian_shear_rate_per_s: c.newtonian_shear_rate_per_s,
-                shear_rate_per_s: p.shear_rate,
-                shear_stress_pa: c.shear_stress_pa,
-                flags: c.flags.iter().map(|f| f.code().to_string()).collect(),
-            })
-            .collect(),
-        (FlowCurveInput::Direct { points }, None) => points
-            .iter()
-            .map(|p| PointOut {
-                rpm: None,
-                dial: None,
-                newtonian_shear_rate_per_s: p.shear_rate,
-                shear_rate_per_s: p.shear_rate,
-                shear_stress_pa: p.shear_stress,
-                flags: Vec::new(),
-            })
-            .collect(),
-        (FlowCurveInput::Dial { .. }, None) => Vec::new(),
-    }
-}
-
-/// One warning per flag kind present, naming the readings (1-based rows) it applies to.
-fn flag_warnings(rows: &[Converted]) -> Vec<String> {
-    let mut kinds: Vec<instrument::ReadingFlag> =
-        rows.iter().flat_map(|c| c.flags.iter().copied()).collect();
-    kinds.sort_by_key(|f| f.code());
-    kinds.dedup();
-    kinds
-        .into_iter()
-        .map(|flag| {
-            let which: Vec<String> = rows
-                .iter()
-                .enumerate()
-                .filter(|(_, c)| c.flags.contains(&flag))
-                .map(|(i, _)| (i + 1).to_string())
-                .collect();
-            let noun = if which.len() == 1 {
-                "reading"
-            } else {
-                "readings"
-            };
-            format!("{noun} {}: {}", which.join(", "), flag.explain())
-        })
-        .collect()
 }

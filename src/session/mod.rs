@@ -4,11 +4,17 @@
 //! `rheoside fit` and a number drawn on screen come from the same code path. Later
 //! capabilities (lines and restart, pumps, tanks, findings) add one file each here.
 
+pub mod api_rp13d;
+mod assess;
+pub mod checks;
+mod curve_checks;
 pub mod duration;
 pub mod flow_curve;
 pub mod line;
 pub mod line_plant;
 pub mod line_words;
+pub mod off_scale;
+mod points;
 pub mod pump;
 mod pump_site;
 pub mod pump_words;
@@ -29,6 +35,7 @@ mod tank_readings;
 pub mod tank_words;
 pub mod temperature;
 pub mod trend;
+pub mod trend_property;
 
 pub use flow_curve::{
     FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, PointOut, Why, analyse,

@@ -8,7 +8,7 @@ use super::flow_curve::{
     FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, analyse,
 };
 use crate::instrument::DialReading;
-use crate::journal::{DialRow, Payload, Record, ResultKind, Severity};
+use crate::journal::{DialRow, Payload, PreviousEnd, Record, ResultKind, Severity};
 use crate::site::Site;
 use chrono::{DateTime, FixedOffset, Utc};
 
@@ -158,6 +158,8 @@ pub struct SessionState {
     pub results: Vec<Entry<SavedResult>>,
     pub notes: Vec<Entry<String>>,
     pub findings: Vec<Entry<FindingItem>>,
+    /// Each time the session was picked up again, with how the run before it ended.
+    pub resumptions: Vec<Entry<PreviousEnd>>,
     /// Things in the record stream that should not happen (out of sequence, after the end…),
     /// in words; the records are still applied.
     pub problems: Vec<String>,
@@ -242,6 +244,11 @@ impl SessionState {
                 self.findings.push(entry(record, at, item));
             }
             Payload::SessionEnd => self.end(record.seq, at),
+            Payload::SessionResumed { previous_end } => {
+                // A new run starts: records after this one are not "after the end".
+                self.ended = None;
+                self.resumptions.push(entry(record, at, *previous_end));
+            }
         }
     }
 
@@ -312,7 +319,8 @@ impl SessionState {
                 self.last_seq + 1
             ));
         }
-        if let Some(end) = self.ended {
+        let resumes = matches!(record.payload, Payload::SessionResumed { .. });
+        if let Some(end) = self.ended.filter(|_| !resumes) {
             self.problems.push(format!(
                 "record {} was written after the session ended ({} UTC)",
                 record.seq,

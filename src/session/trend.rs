@@ -1,7 +1,8 @@
 //! A product's fitted constants session by session, checked against its spec limits.
 //!
 //! Pure: the caller reads the files and the clock (`now` is passed in). Each session
-//! contributes its last viscometer set of the product inside the window, fitted through
+//! contributes every viscometer set of the product inside the window (so an out-of-spec
+//! set followed by a good one in the same session is still seen), fitted through
 //! the same [`super::state::fit_rows`] the report and the TUI use. When the set's
 //! temperature and the product's activation energy are known, the viscosity parameter is
 //! shifted to the product's reference temperature before the limits are checked.
@@ -23,6 +24,11 @@ pub enum TrendError {
         "--since '{text}': give a whole number and h, d or w (hours, days, weeks), e.g. 30d, 12h, 8w"
     )]
     BadSince { text: String },
+    #[error("--property '{text}' is not a property a trend can chart; accepted: {accepted}")]
+    UnknownProperty {
+        text: String,
+        accepted: &'static str,
+    },
     #[error("product '{name}' is not in site '{site}'; its products: {known}")]
     UnknownProduct {
         name: String,
@@ -204,7 +210,7 @@ impl Constants {
     }
 }
 
-/// One session's row of the trend.
+/// One set's row of the trend.
 #[derive(Debug, Clone, PartialEq)]
 pub struct SessionPoint {
     pub session: String,
@@ -212,7 +218,7 @@ pub struct SessionPoint {
     pub operator: String,
     pub at: Moment,
     pub set_seq: u64,
-    /// Sets of this product in the window in this session (the last is shown).
+    /// Sets of this product in the window in this session (each is a row of its own).
     pub sets: usize,
     pub temperature_k: Option<f64>,
     /// The reference temperature K, μ, μp or μc were shifted to (Arrhenius, the product's
@@ -275,17 +281,19 @@ impl<'a> TrendBuilder<'a> {
             Some(Payload::SessionStart { .. }) => return self.trend.other_site += 1,
             _ => return self.trend.not_journal += 1,
         }
-        if let Some(point) = self.point(records) {
-            self.trend.points.push(point);
-        }
-    }
-
-    fn point(&self, records: &[Record]) -> Option<SessionPoint> {
-        let (count, last) = records
+        let ours: Vec<&Record> = records
             .iter()
             .filter(|r| r.utc >= self.trend.since && self.is_our_set(r))
-            .fold((0, None), |(n, _), r| (n + 1, Some(r)));
-        let record = last?;
+            .collect();
+        let count = ours.len();
+        let points: Vec<SessionPoint> = ours
+            .into_iter()
+            .filter_map(|r| self.point(r, count))
+            .collect();
+        self.trend.points.extend(points);
+    }
+
+    fn point(&self, record: &Record, count: usize) -> Option<SessionPoint> {
         let Payload::ViscometerSet {
             viscometer,
             rows,
@@ -333,12 +341,13 @@ impl<'a> TrendBuilder<'a> {
         }
     }
 
-    /// The trend, sessions in time order (ties by session id).
+    /// The trend, sets in time order (ties by session id, then record number).
     pub fn finish(mut self) -> Trend {
         self.trend.points.sort_by(|a, b| {
             a.at.utc
                 .cmp(&b.at.utc)
                 .then_with(|| a.session.cmp(&b.session))
+                .then_with(|| a.set_seq.cmp(&b.set_seq))
         });
         self.trend
     }

@@ -45,7 +45,12 @@ pub struct SiteError {
 
 impl fmt::Display for SiteError {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        write!(f, "{}:{}:{}: ", self.path, self.line, self.column)?;
+        // Line 0 means no position in the file (it could not be read): say only the path.
+        if self.line == 0 {
+            write!(f, "{}: ", self.path)?;
+        } else {
+            write!(f, "{}:{}:{}: ", self.path, self.line, self.column)?;
+        }
         match self.kind {
             ErrorKind::Unreadable | ErrorKind::Syntax | ErrorKind::Missing => {
                 f.write_str(&self.message)

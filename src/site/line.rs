@@ -25,6 +25,11 @@ pub(crate) const LINE_KEYS: &[&str] = &[
 pub const DEFAULT_RESTART_MARGIN: f64 = 0.10;
 /// Largest gel cold factor accepted: beyond this the product is another material.
 const MAX_GEL_COLD_FACTOR: f64 = 100.0;
+/// Plant pipe bores, m: 2 mm tube to a 3 m main (common practice, no source). An inner
+/// diameter of 5e-324 m passed before.
+const BORE_M: (f64, f64) = (2e-3, 3.0);
+/// Line lengths, m: 10 cm to 100 km (common practice, no source).
+const LINE_LENGTH_M: (f64, f64) = (0.1, 1e5);
 
 /// Largest relative roughness ε/D accepted; the friction-factor charts stop at 0.05.
 const MAX_RELATIVE_ROUGHNESS: f64 = 0.05;
@@ -34,8 +39,18 @@ pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Line> {
     let (id, description) = t.identity(sink);
     let len =
         |key, rule, need, sink: &mut Sink| t.quantity(sink, key, Dimension::Length, rule, need);
-    let diameter = len("inner_diameter", Rule::Positive, Need::Required, sink);
-    let length = len("length", Rule::Positive, Need::Required, sink);
+    let diameter = len(
+        "inner_diameter",
+        Rule::Within(BORE_M.0, BORE_M.1),
+        Need::Required,
+        sink,
+    );
+    let length = len(
+        "length",
+        Rule::Within(LINE_LENGTH_M.0, LINE_LENGTH_M.1),
+        Need::Required,
+        sink,
+    );
     let roughness = len("roughness", Rule::NonNegative, Need::Required, sink);
     let elevation = len("elevation_change", Rule::Any, Need::Optional, sink);
     let fittings = len("fittings_length", Rule::NonNegative, Need::Optional, sink);

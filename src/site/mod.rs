@@ -33,7 +33,7 @@ pub use pump::MIN_CURVE_POINTS;
 pub use summary::summary;
 
 use errors::Sink;
-use fields::Need;
+use fields::{Need, Rule};
 use raw::RawTable;
 use std::io::Read;
 use std::path::Path;
@@ -47,7 +47,17 @@ pub const DEMO_LABEL: &str = "site-configs/demo.toml";
 pub const MAX_FILE_BYTES: u64 = 1024 * 1024;
 
 const ROOT_KEYS: &[&str] = &["site", "product", "viscometer", "line", "pump", "tank"];
-const SITE_KEYS: &[&str] = &["id", "name", "unit_system", "operators"];
+const SITE_KEYS: &[&str] = &[
+    "id",
+    "name",
+    "unit_system",
+    "operators",
+    "atmospheric_pressure",
+];
+
+/// Accepted atmospheric pressures, Pa (absolute): from about 5500 m altitude (50 kPa) to
+/// below sea level (the Dead Sea shore reads about 106.7 kPa; from memory).
+const ATMOSPHERE_RANGE_PA: (f64, f64) = (50_000.0, 110_000.0);
 const UNIT_SYSTEMS: [(&str, crate::units::UnitSystem); 2] = [
     ("si", crate::units::UnitSystem::Si),
     ("us-customary", crate::units::UnitSystem::UsCustomary),
@@ -90,7 +100,10 @@ pub fn load_file(path: &Path) -> Result<Site, SiteErrors> {
 }
 
 fn read_limited(path: &Path) -> Result<String, String> {
-    let file = std::fs::File::open(path).map_err(|e| e.to_string())?;
+    let file = std::fs::File::open(path).map_err(|e| match e.kind() {
+        std::io::ErrorKind::NotFound => "not found; check the path".to_string(),
+        _ => e.to_string(),
+    })?;
     let mut bytes = Vec::new();
     file.take(MAX_FILE_BYTES + 1)
         .read_to_end(&mut bytes)
@@ -153,12 +166,13 @@ fn build(root_value: &raw::Value<'_>, sink: &mut Sink, path_label: &str) -> Opti
     let lines = all(tables.lines, sink, line::build);
     let pumps = all(tables.pumps, sink, pump::build);
     let tanks = all(tables.tanks, sink, tank::build);
-    let (id, name, unit_system, operators) = header.flatten()?;
+    let (id, name, unit_system, operators, atmospheric_pressure_pa) = header.flatten()?;
     Some(Site {
         id,
         name,
         unit_system,
         operators,
+        atmospheric_pressure_pa,
         products: products?,
         viscometers: viscometers?,
         lines: lines?,
@@ -168,14 +182,23 @@ fn build(root_value: &raw::Value<'_>, sink: &mut Sink, path_label: &str) -> Opti
     })
 }
 
-type Header = (String, String, crate::units::UnitSystem, Vec<String>);
+type Header = (String, String, crate::units::UnitSystem, Vec<String>, f64);
 
 fn site_header(t: RawTable, sink: &mut Sink) -> Option<Header> {
     let id = t.id(sink, "id", Need::Required);
     let name = t.text(sink, "name", Need::Required);
     let system = t.choice(sink, "unit_system", &UNIT_SYSTEMS, Need::Required);
     let operators = t.texts(sink, "operators");
-    Some((id?, name?, system?, operators))
+    let (lo, hi) = ATMOSPHERE_RANGE_PA;
+    let atmosphere = t.quantity(
+        sink,
+        "atmospheric_pressure",
+        crate::units::Dimension::Pressure,
+        Rule::Within(lo, hi),
+        Need::Optional,
+    );
+    let atmosphere = atmosphere.unwrap_or(crate::units::STANDARD_ATMOSPHERE_PA);
+    Some((id?, name?, system?, operators, atmosphere))
 }
 
 /// Build every table of one kind; `None` if any failed (each failure is already reported).

@@ -11,6 +11,9 @@ pub struct Site {
     pub name: String,
     pub unit_system: UnitSystem,
     pub operators: Vec<String>,
+    /// Atmospheric pressure at the site, Pa absolute (`atmospheric_pressure`, default the
+    /// standard atmosphere 101.325 kPa): subtracted from "psia"/"bara" gauge readings.
+    pub atmospheric_pressure_pa: f64,
     pub products: Vec<Product>,
     pub viscometers: Vec<Viscometer>,
     pub lines: Vec<Line>,

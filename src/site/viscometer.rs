@@ -171,8 +171,20 @@ fn spindle(t: &RawTable, sink: &mut Sink) -> Option<Geometry> {
     }))
 }
 
+/// Dimensions a bench viscometer's bob, cup or spindle can have, m: 0.5 mm to 0.5 m
+/// (common practice, no source). Outside it the number is a typo or a wrong unit
+/// (a radius of 1e-200 m passed before and every fit then blamed the readings).
+const VISCOMETER_SIZE_M: (f64, f64) = (5e-4, 0.5);
+
 fn length(t: &RawTable, key: &str, sink: &mut Sink) -> Option<f64> {
-    t.quantity(sink, key, Dimension::Length, Rule::Positive, Need::Required)
+    let (lo, hi) = VISCOMETER_SIZE_M;
+    t.quantity(
+        sink,
+        key,
+        Dimension::Length,
+        Rule::Within(lo, hi),
+        Need::Required,
+    )
 }
 
 /// Torque per dial unit, full-scale dial and end-effect factor. The torque may be given per

@@ -218,6 +218,7 @@ pub fn summarize(payload: &Payload, equipment: Option<&str>) -> String {
         Payload::Note { text } => format!("{}{at}: {}", super::strings::note::SUMMARY, clean(text)),
         Payload::Finding { text, .. } => format!("{}{at}: {}", s::FINDING, clean(text)),
         Payload::SessionEnd => s::SESSION_END.to_string(),
+        Payload::SessionResumed { previous_end } => previous_end.explain().to_string(),
     }
 }
 

@@ -49,7 +49,7 @@ const PRESSURE: &[&str] = &[
     "dyn/cm2",
     "lbf/100ft2",
 ];
-const FLOW: &[&str] = &["m3/h", "m3/s", "L/s", "L/min", "gpm", "bbl/min"];
+const FLOW: &[&str] = &["m3/h", "m3/s", "L/s", "L/min", "gpm", "igpm", "bbl/min"];
 const LENGTH: &[&str] = &["m", "cm", "mm", "in", "ft"];
 const DYNAMIC_VISCOSITY: &[&str] = &["Pa.s", "mPa.s", "cP", "P"];
 const KINEMATIC_VISCOSITY: &[&str] = &["cSt", "mm2/s", "m2/s"];
@@ -197,7 +197,12 @@ impl Dimension {
         let shown: Vec<&str> = self
             .accepted_units()
             .iter()
-            .map(|u| if u.is_empty() { bare_phrase(self) } else { u })
+            .map(|u| match *u {
+                "" => bare_phrase(self),
+                "gpm" => "gpm (US gallons per minute)",
+                "igpm" => "igpm (imperial gallons per minute)",
+                u => u,
+            })
             .collect();
         shown.join(", ")
     }

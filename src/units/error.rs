@@ -66,6 +66,17 @@ pub enum UnitError {
     )]
     MilliPascalPressure { text: String },
 
+    /// A gauge pressure below −1 atmosphere: below vacuum.
+    #[error(
+        "'{text}' is below vacuum: a gauge pressure cannot be lower than minus one atmosphere \
+         (−{atmosphere_kpa} kPa at this site); check the sign and the unit"
+    )]
+    BelowVacuum { text: String, atmosphere_kpa: f64 },
+
+    /// An absolute pressure below zero.
+    #[error("'{text}': an absolute pressure cannot be negative; check the sign and the unit")]
+    NegativeAbsolute { text: String },
+
     /// A temperature below 0 K.
     #[error("'{text}' is below absolute zero (0 K = -273.15 C = -459.67 F)")]
     BelowAbsoluteZero { text: String },

@@ -9,6 +9,9 @@ pub const NOT_A_VALUE: &str = "—";
 
 /// `si` in the unit `system` shows `dim` in, e.g. "6.20 bar".
 pub fn format(si: f64, dim: Dimension, system: UnitSystem) -> String {
+    if dim == Dimension::Time {
+        return super::duration::format_duration(si);
+    }
     format_in(si, dim, display_unit(dim, system))
 }
 
@@ -24,11 +27,27 @@ pub fn format_in(si: f64, dim: Dimension, unit: &str) -> String {
     if !value.is_finite() {
         return NOT_A_VALUE.to_string();
     }
-    let number = significant(value);
+    let number = match row {
+        Some(row) if dim == Dimension::Temperature => temperature_number(value, row),
+        _ => significant(value),
+    };
     if unit.is_empty() {
         number
     } else {
         format!("{number} {unit}")
+    }
+}
+
+/// Rounding must not carry a temperature near absolute zero below it ("-460 °F" would be
+/// refused when typed back): round towards the warmer side instead.
+fn temperature_number(value: f64, row: &UnitRow) -> String {
+    let text = significant(value);
+    match text.parse::<f64>() {
+        Ok(shown) if row.to_si(shown) < 0.0 => {
+            let warmer = (value * 100.0).ceil() / 100.0;
+            strip_negative_zero(format!("{warmer:.2}"))
+        }
+        _ => text,
     }
 }
 

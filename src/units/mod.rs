@@ -18,16 +18,22 @@
 //! - Speed is stored as angular speed in rad/s; 1 rpm = 2π/60 rad/s.
 //! - Temperature is stored in kelvin; values below 0 K are refused.
 //! - Gauge or absolute: the stored value is whatever the field says it is (each pressure
-//!   field's help states gauge, absolute or difference). Suffixes such as "psig", "bara",
-//!   "kPa(g)" are refused with a message instead of being silently dropped, since taking
-//!   "psia" as psi in a gauge field would be off by an atmosphere.
+//!   field's help states gauge, absolute or difference). In a gauge field ([`parse_gauge_pressure`])
+//!   "psig", "barg", "kPa(g)" are taken as gauge and "psia", "bara" as absolute, converted by
+//!   subtracting the site's atmospheric pressure; a gauge value below −1 atmosphere is
+//!   refused. Elsewhere the suffixes are refused with a message instead of being silently
+//!   dropped, since taking "psia" as psi would be off by an atmosphere.
+//! - "gpm" is the US gallon per minute (231 in³); "igpm" the imperial gallon per minute.
+//! - Durations show as hours and minutes ("62 h 30 min"), which also parse back.
 //! - "mPa" typed with exactly that case in a pressure field is refused (millipascal vs
 //!   megapascal is a factor 10⁹); any other case ("mpa", "MPA") reads as MPa.
 //! - A fraction is 0–1 as a bare number, or 0–100 with "%"; outside that it is refused.
 
 mod dimension;
+mod duration;
 mod error;
 mod format;
+mod gauge;
 mod parse;
 pub mod table;
 
@@ -35,13 +41,20 @@ pub mod table;
 mod tests;
 
 pub use dimension::{Dimension, UnitSystem, display_unit};
+pub use duration::format_duration;
 pub use error::UnitError;
 pub use format::{NOT_A_VALUE, format, format_in, significant};
+pub use gauge::{GaugePressure, PressureBasis, STANDARD_ATMOSPHERE_PA, parse_gauge_pressure};
 pub use parse::{normalize, parse_with_default};
 
 /// Parse `text` as a quantity of `dim` and return its SI value; a bare number is in
 /// `dim.default_unit()`.
 pub fn parse(text: &str, dim: Dimension) -> Result<f64, UnitError> {
+    if dim == Dimension::Time
+        && let Some(total) = duration::parse_compound(text)
+    {
+        return total;
+    }
     parse_with_default(text, dim, dim.default_unit())
 }
 

@@ -19,6 +19,9 @@ pub const STANDARD_GRAVITY: f64 = 9.806_65;
 pub const POUND_FORCE: f64 = POUND * STANDARD_GRAVITY;
 /// US liquid gallon = 231 in³ = 3.785 411 784 × 10⁻³ m³, exact (NIST SP 811, App. B.8).
 pub const US_GALLON: f64 = 231.0 * INCH * INCH * INCH;
+/// Imperial gallon, exact: 4.546 09 × 10⁻³ m³ (NIST SP 811, App. B.8; UK Weights and
+/// Measures Act 1985).
+pub const IMPERIAL_GALLON: f64 = 4.546_09e-3;
 /// Petroleum barrel = 42 US gallons (NIST SP 811, App. B.8: 1.589 873 E−01 m³).
 pub const BARREL: f64 = 42.0 * US_GALLON;
 /// Pound-force per square inch = lbf / in² ≈ 6894.757 293 168 Pa (NIST SP 811, App. B.8:
@@ -105,6 +108,8 @@ pub const TABLE: &[UnitRow] = &[
     r("l/s", D::Flow, LITRE), r("l/min", D::Flow, LITRE / MINUTE), r("lpm", D::Flow, LITRE / MINUTE),
     r("gpm", D::Flow, US_GALLON / MINUTE), r("gal/min", D::Flow, US_GALLON / MINUTE),
     r("usgpm", D::Flow, US_GALLON / MINUTE), r("gpm(us)", D::Flow, US_GALLON / MINUTE),
+    r("igpm", D::Flow, IMPERIAL_GALLON / MINUTE), r("impgpm", D::Flow, IMPERIAL_GALLON / MINUTE),
+    r("gpm(uk)", D::Flow, IMPERIAL_GALLON / MINUTE),
     r("bbl/min", D::Flow, BARREL / MINUTE), r("bpm", D::Flow, BARREL / MINUTE),
     r("m", D::Length, 1.0), r("cm", D::Length, 1e-2), r("mm", D::Length, 1e-3),
     r("in", D::Length, INCH), r("inch", D::Length, INCH), r("inches", D::Length, INCH),

@@ -12,7 +12,7 @@ use clap::Args;
 /// still printed, with the reason).
 #[derive(Debug, Args)]
 pub struct MixArgs {
-    /// Tank id from the site config (needs --site FILE).
+    /// Tank id from the site config (--site, or the bundled demo site).
     #[arg(long, value_name = "ID")]
     pub tank: Option<String>,
     /// rushton-turbine, pitched-blade-turbine, propeller, hydrofoil, anchor or helical-ribbon.

@@ -20,14 +20,14 @@ use std::process::ExitCode;
 
 pub fn run(cli: &Cli, args: &MixArgs) -> Result<ExitCode> {
     let mut flags = flags::tank_flags(args)?;
-    let site = load_site(cli)?;
+    let site = load_site(cli, args)?;
     let tank_id = args.tank.as_deref();
     let product = args.source.product.as_deref();
     let site_tank = match (&site, tank_id) {
         (Some(s), Some(id)) => Some(tank_input::site_tank(s, id, product)?),
-        (None, Some(_)) => bail!("--tank needs --site FILE to look the tank up"),
+        (None, Some(_)) => bail!("--tank needs a site config to look the tank up in"),
         (None, None) if product.is_some() || args.source.journal.is_some() => {
-            bail!("--product and --journal need --site FILE (and usually --tank ID)")
+            bail!("--product and --journal need a site config (and usually --tank ID)")
         }
         _ => None,
     };
@@ -98,11 +98,15 @@ fn refused_exit(answer: &TankAnswer) -> ExitCode {
     }
 }
 
-fn load_site(cli: &Cli) -> Result<Option<Site>> {
-    match &cli.site {
-        Some(path) => crate::site::load_file(path)
-            .map(Some)
-            .map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}")),
-        None => Ok(None),
+/// The site given, or the bundled demo site when a tank, product or journal is named without
+/// one (as `--site`'s help promises); none for a tank described wholly by flags.
+fn load_site(cli: &Cli, args: &MixArgs) -> Result<Option<Site>> {
+    let names_site_things =
+        args.tank.is_some() || args.source.product.is_some() || args.source.journal.is_some();
+    if cli.site.is_none() && !names_site_things {
+        return Ok(None);
     }
+    crate::site::load_or_demo(cli.site.as_deref())
+        .map(Some)
+        .map_err(|errors| anyhow::anyhow!("the site config has errors:\n{errors}"))
 }

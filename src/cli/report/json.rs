@@ -49,6 +49,7 @@ fn session(site: &Site, j: &Journal) -> Value {
             "preview": t.preview,
         })),
         "problems": problems(site, j),
+        "resumptions": s.resumptions.iter().map(|r| with_envelope(r, json!({ "previous_end": r.item }))).collect::<Vec<_>>(),
         "readings": s.readings.iter().map(|r| with_envelope(r, json!({
             "name": r.item.name,
             "raw": r.item.raw,

@@ -80,6 +80,7 @@ fn summary(j: &Journal) -> String {
         ("Operators", list(&s.operators)),
         ("Started", when(s.started, "not recorded")),
         ("Ended", when(s.ended, "not ended (no session-end record)")),
+        ("Runs", cell(&super::runs::runs_text(s))),
         (
             "Records",
             format!("{} (last is record {})", s.records, s.last_seq),

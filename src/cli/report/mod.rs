@@ -9,6 +9,7 @@ mod csv;
 mod json;
 mod md;
 mod md_set;
+mod runs;
 mod seen;
 
 use super::args::{Cli, ReportArgs};
@@ -150,8 +151,9 @@ pub(crate) fn problems(site: &Site, j: &Journal) -> Vec<String> {
         Some(_) => {}
         None => out.push("The journal has no session-start record.".to_string()),
     }
+    out.extend(runs::unfinished_runs(&j.state));
     if j.state.ended.is_none() {
-        out.push("No session-end record: the session was not closed (still open, or stopped by a crash).".to_string());
+        out.push("No session-end record: the session was not closed (still open, or stopped by a crash, a kill or a power loss).".to_string());
     }
     out.extend(
         j.state

@@ -1,10 +1,11 @@
-//! The `trend` chart: apparent viscosity per session as ASCII columns with the limit lines,
-//! so it reads the same over any SSH link or terminal font.
+//! The `trend` chart: one limited property (K, n, τ0 or the apparent viscosity) per set as
+//! ASCII columns with the limit lines, so it reads the same over any SSH link or terminal font.
 
-use crate::present::limits::rate_text;
+use crate::present::limits::{rate_text, value_text};
 use crate::session::trend::{SessionPoint, Trend};
+use crate::session::trend_property::property_value;
 use crate::site::{LimitProperty, Product};
-use crate::units::{self, Dimension, UnitSystem};
+use crate::units::UnitSystem;
 use std::fmt::Write as _;
 
 /// Widest plot area in columns; more sessions share a column.
@@ -12,7 +13,7 @@ const MAX_COLUMNS: usize = 60;
 const HEIGHT: usize = 10;
 const LABEL: usize = 11;
 
-/// One column of the chart: the highest μa of its sessions, and whether any is out.
+/// One column of the chart: the highest value of its sets, and whether any is out of spec.
 #[derive(Debug, Clone, Copy, PartialEq)]
 struct Column {
     value: Option<f64>,
@@ -20,23 +21,36 @@ struct Column {
 }
 
 /// The chart, or a line saying why there is none. Pure ASCII.
-pub fn chart(trend: &Trend, product: &Product, system: UnitSystem) -> String {
+pub fn chart(
+    trend: &Trend,
+    product: &Product,
+    system: UnitSystem,
+    property: LimitProperty,
+) -> String {
     let per = trend.points.len().div_ceil(MAX_COLUMNS).max(1);
-    let columns: Vec<Column> = trend.points.chunks(per).map(column).collect();
-    let limits = viscosity_limits(product, trend.rate_per_s);
+    let columns: Vec<Column> = trend
+        .points
+        .chunks(per)
+        .map(|c| column(c, property))
+        .collect();
+    let limits = property_limits(product, property);
+    let label = |v: f64| ascii_value(property, v, system);
     let highest = columns
         .iter()
         .filter_map(|c| c.value)
         .chain(limits.iter().copied())
         .fold(0.0_f64, f64::max);
     if columns.is_empty() || !(highest > 0.0 && highest.is_finite()) {
-        return "\n(no chart: no fitted session in the window)\n".to_string();
+        return format!(
+            "\n(no chart of {}: no fitted set in the window has a value above zero)\n",
+            property_title(property)
+        );
     }
     let top = highest * 1.1;
-    let mut out = title(trend, per, &limits, system);
+    let mut out = title(property, per, &limits, &label);
     let limit_rows: Vec<(usize, f64)> = limits.iter().map(|&l| (level(l, top), l)).collect();
     for r in (1..=HEIGHT).rev() {
-        out.push_str(&plot_row(r, &columns, &limit_rows, top, system));
+        out.push_str(&plot_row(r, &columns, &limit_rows, top, &label));
     }
     let _ = writeln!(out, "{:>LABEL$} +{}", "0", "-".repeat(columns.len()));
     if columns.iter().any(|c| c.out) {
@@ -50,12 +64,11 @@ pub fn chart(trend: &Trend, product: &Product, system: UnitSystem) -> String {
     out
 }
 
-fn column(points: &[SessionPoint]) -> Column {
+fn column(points: &[SessionPoint], property: LimitProperty) -> Column {
     let fitted = points.iter().filter_map(|p| p.outcome.as_ref().ok());
     let value = fitted
         .clone()
-        .map(|c| c.mu_a_pa_s)
-        .filter(|v| v.is_finite())
+        .filter_map(|c| property_value(c, property))
         .reduce(f64::max);
     Column {
         value,
@@ -63,15 +76,27 @@ fn column(points: &[SessionPoint]) -> Column {
     }
 }
 
-/// The bounds of every apparent-viscosity limit stated at the chart's shear rate.
-fn viscosity_limits(product: &Product, rate: f64) -> Vec<f64> {
+/// The bounds of every limit on this property (the apparent viscosity at the same rate).
+fn property_limits(product: &Product, property: LimitProperty) -> Vec<f64> {
     product
         .limits
         .iter()
-        .filter(|l| matches!(l.property, LimitProperty::ApparentViscosity { shear_rate_per_s } if shear_rate_per_s == rate))
+        .filter(|l| l.property == property)
         .flat_map(|l| [l.min, l.max])
         .flatten()
         .collect()
+}
+
+/// The chart's name for the property, ASCII.
+fn property_title(property: LimitProperty) -> String {
+    match property {
+        LimitProperty::ConsistencyIndex => "Consistency index K".to_string(),
+        LimitProperty::FlowIndex => "Flow behaviour index n".to_string(),
+        LimitProperty::YieldStress => "Yield stress tau0".to_string(),
+        LimitProperty::ApparentViscosity { shear_rate_per_s } => {
+            format!("Apparent viscosity at {}", rate_text(shear_rate_per_s))
+        }
+    }
 }
 
 /// Row 1..=HEIGHT a value reaches; anything above zero shows at least one mark.
@@ -84,24 +109,29 @@ fn level(v: f64, top: f64) -> usize {
     }
 }
 
-fn title(trend: &Trend, per: usize, limits: &[f64], system: UnitSystem) -> String {
+fn title(
+    property: LimitProperty,
+    per: usize,
+    limits: &[f64],
+    label: &dyn Fn(f64) -> String,
+) -> String {
     let spread = if per == 1 {
-        "one column per session".to_string()
+        "one column per set".to_string()
     } else {
-        format!("one column per {per} sessions, the highest shown")
+        format!("one column per {per} sets, the highest shown")
     };
     let lines = if limits.is_empty() {
-        "no viscosity limit at this rate".to_string()
+        "no limit on it".to_string()
     } else {
-        let shown: Vec<String> = limits.iter().map(|&l| ascii_viscosity(l, system)).collect();
+        let shown: Vec<String> = limits.iter().map(|&l| label(l)).collect();
         format!(
             "'-' marks the limits {} ('=' across a bar)",
             shown.join(" and ")
         )
     };
     format!(
-        "\nApparent viscosity at {}, {spread}, oldest left.\n{lines}; '?' no fit.\n",
-        rate_text(trend.rate_per_s)
+        "\n{}, {spread}, oldest left.\n{lines}; '?' no fit; '^' a set out of any limit.\n",
+        property_title(property)
     )
 }
 
@@ -110,12 +140,12 @@ fn plot_row(
     columns: &[Column],
     limits: &[(usize, f64)],
     top: f64,
-    system: UnitSystem,
+    value_label: &dyn Fn(f64) -> String,
 ) -> String {
     let on_limit = limits.iter().find(|(l, _)| *l == r);
     let label = match on_limit {
-        Some((_, v)) => ascii_viscosity(*v, system),
-        None if r == HEIGHT => ascii_viscosity(top * r as f64 / HEIGHT as f64, system),
+        Some((_, v)) => value_label(*v),
+        None if r == HEIGHT => value_label(top * r as f64 / HEIGHT as f64),
         None => String::new(),
     };
     let cells: String = columns
@@ -144,10 +174,7 @@ fn date_row(trend: &Trend, width: usize) -> String {
     format!("{:LABEL$}  {a}{}{b}\n", "", " ".repeat(gap))
 }
 
-/// Viscosity text with any non-ASCII unit spelling replaced, for the chart only.
-fn ascii_viscosity(si: f64, system: UnitSystem) -> String {
-    units::format(si, Dimension::DynamicViscosity, system)
-        .chars()
-        .map(|c| if c.is_ascii() { c } else { '?' })
-        .collect()
+/// A value in site units with non-ASCII spellings replaced, for the chart only.
+fn ascii_value(property: LimitProperty, si: f64, system: UnitSystem) -> String {
+    value_text(property, si, crate::present::Style::new(system, true))
 }

@@ -9,16 +9,20 @@ mod print;
 mod scan;
 
 use crate::session::trend::{TrendBuilder, find_product, parse_since};
+use crate::session::trend_property::{limited_properties, parse_property};
 use crate::site::Site;
-use std::path::PathBuf;
 use std::process::ExitCode;
 
 pub fn run(cli: &Cli, args: &TrendArgs) -> anyhow::Result<ExitCode> {
     let site = site_or_demo(cli)?;
     let product = find_product(&site, &args.product)?;
     let window = parse_since(&args.since)?;
+    let properties = match &args.property {
+        Some(text) => parse_property(text, product)?,
+        None => limited_properties(product),
+    };
     let now = chrono::Utc::now();
-    let dir = cli.log_dir.clone().unwrap_or_else(|| PathBuf::from("logs"));
+    let dir = args.log_dir(cli);
     let mut builder = TrendBuilder::new(&site, product, now, window);
     let scan = scan::scan_dir(&dir, &product.name, &mut builder)?;
     let trend = builder.finish();
@@ -26,7 +30,9 @@ pub fn run(cli: &Cli, args: &TrendArgs) -> anyhow::Result<ExitCode> {
     let mut out = print::heading(&site, product, &trend, &args.since);
     out.push_str(&print::table(&trend, system));
     if !trend.points.is_empty() {
-        out.push_str(&chart::chart(&trend, product, system));
+        for property in properties {
+            out.push_str(&chart::chart(&trend, product, system, property));
+        }
     }
     out.push_str(&print::footer(&trend, &scan));
     print!("{out}");

@@ -61,7 +61,7 @@ pub fn table(trend: &Trend, system: UnitSystem) -> String {
 /// Say which rows were brought to the reference temperature and which are as measured.
 fn temperature_legend(trend: &Trend, system: UnitSystem) -> String {
     let shifted: Vec<f64> = trend.points.iter().filter_map(|p| p.shifted_to_k).collect();
-    let mut out = String::from("Each row is the session's last set of this product in the window");
+    let mut out = String::from("Each row is one set of this product in the window");
     match shifted.first() {
         Some(t_ref) if shifted.len() == trend.points.len() => out.push_str(&format!(
             ";\nK (or the viscosity) and μa shifted to {} by the product's activation energy,\n\

@@ -1,6 +1,7 @@
 //! Least-squares fit of one flow model to shear-stress readings, with 95 % intervals.
 
 mod curves;
+mod log;
 pub(crate) mod solve;
 
 use super::data::{Point, check_counts, check_points};
@@ -18,6 +19,19 @@ pub enum Weighting {
     Unweighted,
     /// Residual (τ − τ̂)/τ: every reading counts the same in per cent; for data spanning decades.
     Relative,
+    /// Residual ln τ − ln τ̂: the log–log regression published constants are usually fitted by.
+    Log,
+}
+
+impl Weighting {
+    /// The name typed on the command line and written in JSON (`weighting`).
+    pub fn name(self) -> &'static str {
+        match self {
+            Weighting::Unweighted => "none",
+            Weighting::Relative => "relative",
+            Weighting::Log => "log",
+        }
+    }
 }
 
 #[derive(Debug, Clone, Copy, Default)]
@@ -100,7 +114,7 @@ pub fn fit(kind: ModelKind, points: &[Point], opts: &FitOptions) -> Result<Fit, 
     let y: Vec<f64> = points.iter().map(|p| p.shear_stress).collect();
     let w: Vec<f64> = match opts.weighting {
         Weighting::Unweighted => vec![1.0; points.len()],
-        Weighting::Relative => y.iter().map(|t| 1.0 / t).collect(),
+        Weighting::Relative | Weighting::Log => y.iter().map(|t| 1.0 / t).collect(),
     };
     let d = Data {
         x: &x,
@@ -108,16 +122,34 @@ pub fn fit(kind: ModelKind, points: &[Point], opts: &FitOptions) -> Result<Fit, 
         y: &y,
         w: &w,
     };
-    let solved = solve::solve(kind, &d)?;
+    let solved = match opts.weighting {
+        Weighting::Log => log::solve_log(kind, &d)?,
+        Weighting::Unweighted | Weighting::Relative => solve::solve(kind, &d)?,
+    };
     check_physical(&solved.model)?;
-    Ok(stats::assemble(solved, &d, opts.weighting))
+    let fit = stats::assemble(solved, &d, opts.weighting);
+    check_quality(&fit)?;
+    Ok(fit)
+}
+
+/// A fit whose quality figures are not finite numbers cannot be judged, so it is not shown.
+fn check_quality(fit: &Fit) -> Result<(), FitError> {
+    let finite = fit.r_squared.is_finite() && fit.rmse_pa.is_finite() && fit.ssr.is_finite();
+    if finite {
+        Ok(())
+    } else {
+        Err(FitError::QualityNotFinite {
+            model: fit.model.kind(),
+        })
+    }
 }
 
 /// Viscosities and K must come out above zero, and nothing may be NaN.
 fn check_physical(model: &Model) -> Result<(), FitError> {
     for (name, value) in model.params() {
         let must_be_positive = !matches!(name, ParamName::Tau0);
-        if !value.is_finite() || (must_be_positive && value <= 0.0) {
+        // τ0 ≥ 0 is held by every solver; this is the last guard on the number reported.
+        if !value.is_finite() || (must_be_positive && value <= 0.0) || value < 0.0 {
             return Err(FitError::NotPhysical {
                 model: model.kind(),
                 detail: format!(

@@ -3,7 +3,7 @@
 use super::curves::{CassonRoots, HerschelBulkley, Line, Linear0, Power};
 use crate::rheology::error::FitError;
 use crate::rheology::kind::{ModelKind, ParamName};
-use crate::rheology::levenberg::{Curve, Data, Minimum, minimise, normal};
+use crate::rheology::levenberg::{Curve, Data, Minimum, minimise, normal, ssr_at};
 use crate::rheology::linalg::{Mat3, Vec3, inverse_spd};
 use crate::rheology::linear::{fit_line, weighted_line, weighted_origin_slope};
 use crate::rheology::model::Model;
@@ -24,7 +24,7 @@ pub(crate) struct Solved {
 }
 
 impl Solved {
-    fn new(model: Model, jtj_inv: Option<Mat3>, min: &Minimum) -> Self {
+    pub(crate) fn new(model: Model, jtj_inv: Option<Mat3>, min: &Minimum) -> Self {
         Solved {
             model,
             at_bound: None,
@@ -35,7 +35,7 @@ impl Solved {
     }
 
     /// Mark τ0 as held at zero, adding the iterations spent finding it out.
-    fn tau0_at_bound(mut self, extra_iterations: usize) -> Self {
+    pub(crate) fn tau0_at_bound(mut self, extra_iterations: usize) -> Self {
         self.at_bound = Some(ParamName::Tau0);
         self.iterations += extra_iterations;
         self
@@ -59,14 +59,19 @@ pub(crate) fn solve(kind: ModelKind, d: &Data) -> Result<Solved, FitError> {
     }
 }
 
-fn run<C: Curve>(kind: ModelKind, c: &C, d: &Data, start: Vec3) -> Result<Minimum, FitError> {
+pub(crate) fn run<C: Curve>(
+    kind: ModelKind,
+    c: &C,
+    d: &Data,
+    start: Vec3,
+) -> Result<Minimum, FitError> {
     minimise(c, d, start).map_err(|f| FitError::NotConverged {
         model: kind,
         iterations: f.iterations,
     })
 }
 
-fn jtj_inverse<C: Curve>(c: &C, d: &Data, beta: &Vec3) -> Option<Mat3> {
+pub(crate) fn jtj_inverse<C: Curve>(c: &C, d: &Data, beta: &Vec3) -> Option<Mat3> {
     inverse_spd(&normal(c, d, beta).jtj, c.p())
 }
 
@@ -109,6 +114,16 @@ fn bingham(d: &Data) -> Result<Solved, FitError> {
         return Ok(Solved::new(model, inv, &min).tau0_at_bound(0));
     }
     let min = run(kind, &Line, d, [a, b, 0.0])?;
+    // The bound is held on the minimiser's result too: rounding on extreme readings can carry
+    // τ0 below zero even from a start above it.
+    if min.beta[0] < 0.0 {
+        let (lin, inv) = origin_line(kind, d)?;
+        let model = Model::Bingham {
+            tau0: 0.0,
+            mu_p: lin.beta[0],
+        };
+        return Ok(Solved::new(model, inv, &lin).tau0_at_bound(min.iterations));
+    }
     let model = Model::Bingham {
         tau0: min.beta[0],
         mu_p: min.beta[1],
@@ -136,27 +151,54 @@ fn herschel_bulkley(d: &Data) -> Result<Solved, FitError> {
 
 /// Several τ0 starts, K and n from the log–log line of τ − τ0; the lowest SSR wins. Returns it
 /// with the iterations spent over all starts.
+///
+/// The starts are run best first (by their own SSR), and once two runs end at the same
+/// optimum the rest are skipped: on well-behaved sets every start lands there, and each run
+/// is most of a fit's time. Sets where the starts disagree still try every start.
 fn hb_free_optimum(d: &Data) -> Result<(Minimum, usize), FitError> {
     let kind = ModelKind::HerschelBulkley;
-    let min_tau = d.y.iter().copied().fold(f64::INFINITY, f64::min);
     let mut best: Option<Minimum> = None;
     let mut last_err = FitError::NotConverged {
         model: kind,
         iterations: 0,
     };
     let mut iterations = 0;
-    for frac in HB_TAU0_STARTS {
-        match run(kind, &HerschelBulkley, d, hb_start(d, frac * min_tau)) {
+    let mut agreed = 0;
+    for start in hb_starts_best_first(d) {
+        match run(kind, &HerschelBulkley, d, start) {
             Ok(m) => {
                 iterations += m.iterations;
-                if best.as_ref().is_none_or(|b| m.ssr < b.ssr) {
-                    best = Some(m);
+                match &best {
+                    Some(b) if same_optimum(b, &m) => agreed += 1,
+                    Some(b) if b.ssr <= m.ssr => {}
+                    _ => best = Some(m),
+                }
+                if agreed >= 1 {
+                    break;
                 }
             }
             Err(e) => last_err = e,
         }
     }
     best.map(|b| (b, iterations)).ok_or(last_err)
+}
+
+/// The Herschel–Bulkley starts, lowest starting SSR first (non-finite ones last).
+fn hb_starts_best_first(d: &Data) -> Vec<Vec3> {
+    let min_tau = d.y.iter().copied().fold(f64::INFINITY, f64::min);
+    let mut starts: Vec<(f64, Vec3)> = HB_TAU0_STARTS
+        .iter()
+        .map(|frac| hb_start(d, frac * min_tau))
+        .map(|s| (ssr_at(&HerschelBulkley, d, &s), s))
+        .collect();
+    starts.sort_by(|a, b| a.0.partial_cmp(&b.0).unwrap_or(std::cmp::Ordering::Equal));
+    starts.into_iter().map(|(_, s)| s).collect()
+}
+
+/// Two runs ended at one optimum: parameters within 1e-6 relative (their own settling is
+/// about 1e-10 standard errors, so distinct optima differ by far more).
+fn same_optimum(a: &Minimum, b: &Minimum) -> bool {
+    (0..3).all(|i| (a.beta[i] - b.beta[i]).abs() <= 1e-6 * a.beta[i].abs().max(1e-12))
 }
 
 fn hb_start(d: &Data, tau0: f64) -> Vec3 {

@@ -3,15 +3,21 @@
 //! Each reading has one name, the dimension its value must have, and a one-line help that
 //! says where it is taken and (for pressures) whether it is gauge or a difference.
 
+mod suggest;
+
+pub use suggest::nearest_name;
+
 use crate::journal::Payload;
-use crate::text::sanitize;
-use crate::units::{self, Dimension, UnitError};
+use crate::text::{first_hidden_char, sanitize};
+use crate::units::{self, Dimension, PressureBasis, STANDARD_ATMOSPHERE_PA, UnitError};
 
 /// Which values make physical sense for a reading.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub enum Sign {
-    /// Gauge pressures may be below atmospheric (a suction under vacuum).
     Any,
+    /// A gauge pressure: below atmospheric is fine (a suction under vacuum), below −1
+    /// atmosphere is not; "psig"/"barg" and "psia"/"bara" are understood.
+    Gauge,
     NonNegative,
     Positive,
 }
@@ -44,16 +50,16 @@ const fn kind(
 }
 
 use Dimension as D;
-use Sign::{Any, NonNegative, Positive};
+use Sign::{Any, Gauge, NonNegative, Positive};
 
 /// Every reading `record --reading` accepts.
 #[rustfmt::skip]
 pub const CATALOGUE: &[ReadingKind] = &[
-    kind("suction-pressure", D::Pressure, Any, &["suction"], "gauge pressure at the pump inlet"),
-    kind("discharge-pressure", D::Pressure, Any, &["discharge"], "gauge pressure at the pump outlet"),
-    kind("line-pressure", D::Pressure, Any, &[], "gauge pressure at a tapping on the line"),
+    kind("suction-pressure", D::Pressure, Gauge, &["suction"], "gauge pressure at the pump inlet"),
+    kind("discharge-pressure", D::Pressure, Gauge, &["discharge"], "gauge pressure at the pump outlet"),
+    kind("line-pressure", D::Pressure, Gauge, &[], "gauge pressure at a tapping on the line"),
     kind("pressure-drop", D::Pressure, Any, &["dp"], "pressure difference between two tappings"),
-    kind("flow", D::Flow, NonNegative, &["flow-rate"], "volumetric flow in the line"),
+    kind("flow", D::Flow, NonNegative, &["flow-rate"], "volumetric flow in the line (gpm is US gallons per minute, igpm imperial)"),
     kind("pump-speed", D::Speed, NonNegative, &[], "pump shaft speed"),
     kind("agitator-speed", D::Speed, NonNegative, &[], "agitator shaft speed"),
     kind("agitator-torque", D::Torque, NonNegative, &["torque"], "torque on the agitator shaft"),
@@ -90,9 +96,34 @@ pub struct ParsedReading {
     /// The value and unit as typed (cleaned), e.g. `6.2 bar`.
     pub raw: String,
     pub value_si: f64,
+    /// For a gauge pressure: how it was typed (plain, marked gauge, or absolute converted).
+    pub basis: Option<PressureBasis>,
 }
 
 impl ParsedReading {
+    /// What the program did to the typed value, when it did more than convert units: an
+    /// absolute pressure turned gauge. Journalled beside the reading so the record says so.
+    pub fn conversion_note(&self) -> Option<String> {
+        let Some(PressureBasis::Absolute {
+            absolute_pa,
+            atmosphere_pa,
+        }) = self.basis
+        else {
+            return None;
+        };
+        let bar = |pa: f64| units::format(pa, Dimension::Pressure, units::UnitSystem::Si);
+        Some(format!(
+            "{}: '{}' is an absolute pressure ({}); the site's atmospheric pressure {} kPa \
+             was subtracted, so {} gauge ({} Pa) was saved",
+            self.kind.name,
+            self.raw,
+            bar(absolute_pa),
+            atmosphere_pa / 1000.0,
+            bar(self.value_si),
+            self.value_si
+        ))
+    }
+
     /// The journal payload for this reading.
     pub fn payload(&self) -> Payload {
         Payload::Reading {
@@ -109,14 +140,29 @@ pub enum ReadingError {
     #[error("'{text}': expected NAME=VALUE UNIT, e.g. 'discharge-pressure=6.2 bar'")]
     Shape { text: String },
 
-    #[error("'{name}' is not a reading rheoside knows; accepted: {accepted}")]
-    UnknownName { name: String, accepted: String },
+    #[error("'{name}' is not a reading rheoside knows;{} accepted: {accepted}",
+        .suggestion.map_or(String::new(), |s| format!(" did you mean '{s}'?")))]
+    UnknownName {
+        name: String,
+        suggestion: Option<&'static str>,
+        accepted: String,
+    },
 
-    #[error("{name}: {source}")]
+    // The unit message is the text; it is not repeated as a source.
+    #[error("{name}: {detail}")]
     Value {
         name: &'static str,
-        #[source]
-        source: UnitError,
+        detail: UnitError,
+    },
+
+    #[error(
+        "'{text}': character {position} is an invisible control or format character \
+         ({code}); type the value again with plain characters"
+    )]
+    HiddenCharacter {
+        text: String,
+        position: usize,
+        code: String,
     },
 
     #[error("{name}: '{raw}' is {problem}; a {} reading must be {expected}", .dim.name())]
@@ -130,28 +176,53 @@ pub enum ReadingError {
 }
 
 /// Parse `NAME=VALUE UNIT`, e.g. `discharge-pressure=6.2 bar`; a bare value means the
-/// dimension's default unit.
+/// dimension's default unit. Absolute gauge-field pressures use the standard atmosphere.
 pub fn parse_reading_arg(s: &str) -> Result<ParsedReading, ReadingError> {
-    let clean = sanitize(s, false);
-    let Some((name, value)) = clean.split_once('=') else {
+    parse_reading_arg_at(s, STANDARD_ATMOSPHERE_PA)
+}
+
+/// As [`parse_reading_arg`], with the site's atmospheric pressure (Pa, absolute) for
+/// "psia"/"bara" in gauge fields. A control or format character anywhere is refused, not
+/// cleaned away: cleaning first would turn "1\u{7f}2 bar" into 12 bar.
+pub fn parse_reading_arg_at(s: &str, atmosphere_pa: f64) -> Result<ParsedReading, ReadingError> {
+    if let Some((position, c)) = first_hidden_char(s) {
+        return Err(ReadingError::HiddenCharacter {
+            text: clip(&sanitize(s, false)),
+            position,
+            code: format!("U+{:04X}", u32::from(c)),
+        });
+    }
+    let Some((name, value)) = s.split_once('=') else {
         return Err(ReadingError::Shape {
-            text: clip(clean.trim()),
+            text: clip(s.trim()),
         });
     };
     let kind = find(name).ok_or_else(|| ReadingError::UnknownName {
         name: clip(name.trim()),
+        suggestion: nearest_name(name),
         accepted: accepted_names(),
     })?;
     let raw = value.trim().to_string();
-    let value_si = units::parse(&raw, kind.dimension).map_err(|source| ReadingError::Value {
+    let value_error = |detail| ReadingError::Value {
         name: kind.name,
-        source,
-    })?;
+        detail,
+    };
+    let (value_si, basis) = match kind.sign {
+        Sign::Gauge => {
+            let g = units::parse_gauge_pressure(&raw, atmosphere_pa).map_err(value_error)?;
+            (g.gauge_pa, Some(g.basis))
+        }
+        _ => (
+            units::parse(&raw, kind.dimension).map_err(value_error)?,
+            None,
+        ),
+    };
     check_sign(kind, &raw, value_si)?;
     Ok(ParsedReading {
         kind,
         raw,
         value_si,
+        basis,
     })
 }
 
@@ -181,90 +252,4 @@ fn clip(s: &str) -> String {
 }
 
 #[cfg(test)]
-mod tests {
-    use super::*;
-
-    #[test]
-    fn names_values_and_units_parse_to_si() {
-        // 1 bar = 100 000 Pa exactly (NIST SP 811, 2008, Appendix B).
-        let r = parse_reading_arg("discharge-pressure=6.2 bar").unwrap();
-        assert_eq!(
-            (r.kind.name, r.raw.as_str()),
-            ("discharge-pressure", "6.2 bar")
-        );
-        assert!((r.value_si - 620_000.0).abs() < 1e-6);
-        // 1 rpm = 2π/60 rad/s, by definition of the revolution.
-        let r = parse_reading_arg("agitator_speed = 60 rpm").unwrap();
-        assert!((r.value_si - std::f64::consts::TAU).abs() < 1e-12);
-        // T/K = t/°C + 273.15 (SI Brochure, 9th ed., 2.3.1).
-        let r = parse_reading_arg("Temp=25 C").unwrap();
-        assert_eq!(r.kind.name, "temperature");
-        assert!((r.value_si - 298.15).abs() < 1e-9);
-        // A bare number is the dimension's default unit: bar for pressure.
-        let r = parse_reading_arg("suction=-0.3").unwrap();
-        assert!((r.value_si + 30_000.0).abs() < 1e-6);
-    }
-
-    #[test]
-    fn unknown_name_lists_what_is_accepted() {
-        let err = parse_reading_arg("pressure=3 bar").unwrap_err();
-        let msg = err.to_string();
-        assert!(matches!(err, ReadingError::UnknownName { .. }));
-        assert!(
-            msg.contains("'pressure'") && msg.contains("discharge-pressure, line-pressure"),
-            "{msg}"
-        );
-        for k in CATALOGUE {
-            assert!(msg.contains(k.name), "{msg} misses {}", k.name);
-        }
-    }
-
-    #[test]
-    fn bad_value_gives_the_units_message() {
-        let err = parse_reading_arg("flow=12 bar").unwrap_err();
-        assert!(
-            matches!(err, ReadingError::Value { name: "flow", .. }),
-            "{err}"
-        );
-        assert!(
-            err.to_string().starts_with("flow: '12 bar' is a pressure"),
-            "{err}"
-        );
-        let err = parse_reading_arg("density=").unwrap_err();
-        assert!(matches!(err, ReadingError::Value { .. }), "{err}");
-    }
-
-    #[test]
-    fn shape_and_sign_are_checked() {
-        assert!(matches!(
-            parse_reading_arg("flow 12"),
-            Err(ReadingError::Shape { .. })
-        ));
-        let err = parse_reading_arg("motor-current=-3 A").unwrap_err();
-        assert_eq!(
-            err.to_string(),
-            "motor-current: '-3 A' is negative; a current reading must be zero or more"
-        );
-        assert!(parse_reading_arg("density=0").is_err());
-        assert!(parse_reading_arg("rest-time=0 s").is_ok());
-    }
-
-    #[test]
-    fn catalogue_names_and_aliases_are_unique_and_file_safe() {
-        let mut seen = std::collections::HashSet::new();
-        for k in CATALOGUE {
-            for n in std::iter::once(&k.name).chain(k.aliases) {
-                assert!(seen.insert(*n), "{n} twice");
-                assert!(n.chars().all(|c| c.is_ascii_lowercase() || c == '-'), "{n}");
-            }
-            assert!(!k.help.is_empty());
-        }
-    }
-
-    #[test]
-    fn control_characters_are_stripped_from_the_raw_text() {
-        let r = parse_reading_arg("flow=12\u{1b}[2J m3/h").unwrap();
-        assert_eq!(r.raw, "12 m3/h");
-        assert_eq!(r.payload().kind(), "reading");
-    }
-}
+mod tests;
