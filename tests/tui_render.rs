@@ -110,6 +110,48 @@ fn flow_curve_view_shows_the_fit_and_its_constants() {
     );
 }
 
+/// The product's spec limits on the Flow curve view, in or out in words, checked exactly as
+/// `report` checks them: the shown curve shifted from 45 C to the product's 25 C reference by
+/// its activation energy (`session::trend::at_reference`), then `check_limits`.
+#[test]
+fn the_flow_curve_view_says_which_spec_limits_are_out() {
+    use rheoside::instrument::{DialReading, Geometry};
+    use rheoside::present::{Style, limits};
+    use rheoside::session::trend::{at_reference, check_limits};
+    use rheoside::session::{FlowCurveInput, FlowCurveOptions, analyse};
+    let mut a = with_saved_set();
+    crate::support::journal_answers(&mut a, true);
+    let s = lines(&draw(&a, 80, 24));
+    insta::assert_snapshot!("curve_limits_80x24", s);
+    assert!(s.contains("Spec limits, chilli-sauce, at 25.0 °C"), "{s}");
+    // The same checks, made here from the readings with the library the report uses.
+    let readings: Vec<DialReading> = [600.0, 300.0, 200.0, 100.0, 6.0, 3.0]
+        .into_iter()
+        .zip([110.0, 76.0, 61.5, 44.0, 16.0, 14.0])
+        .map(|(r, d)| DialReading::new(r, d))
+        .collect();
+    let input = FlowCurveInput::Dial {
+        geometry: &Geometry::StandardSixSpeed,
+        readings: &readings,
+    };
+    let curve = analyse(input, &FlowCurveOptions::default()).expect("the set fits");
+    let site = rheoside::site::demo().expect("the demo site");
+    let product = site.product("chilli-sauce").expect("the sauce");
+    let (model, _) = at_reference(product, &curve.fit.model, Some(318.15));
+    let checks = check_limits(&product.limits, &model);
+    let out: Vec<_> = checks.iter().filter(|c| c.is_out()).collect();
+    // The invented sauce (K about 0.75 Pa.s^n) is far below its K minimum of 8.
+    assert!(!out.is_empty());
+    for c in out {
+        let words = limits::check_text(c, Style::SI);
+        let flat: String = s.split_whitespace().collect::<Vec<_>>().join(" ");
+        assert!(
+            flat.contains(&format!("OUT {words}")),
+            "{words} not in\n{s}"
+        );
+    }
+}
+
 #[test]
 fn the_journal_view_lists_records_with_their_state() {
     let mut a = app();

@@ -232,6 +232,13 @@ pub mod curve {
     pub const SENDING: &str = "sending";
     pub const RATE_INVALID: &str = "shear rate";
     pub const PM_IS_95: &str = "(± is the 95 % interval)";
+    pub const LIMITS_TITLE: &str = "Spec limits,";
+    pub const LIMITS_AT: &str = "at";
+    pub const LIMITS_AS_MEASURED: &str = "as measured";
+    pub const NO_LIMITS: &str = "No spec limits for this product in the site config.";
+    pub const OUT: &str = "OUT";
+    pub const IN: &str = "in";
+    pub const IS: &str = "is";
     pub const AT: &str = "at";
 }
 

@@ -13,6 +13,7 @@ use crate::journal::Payload;
 use crate::present::Style;
 use crate::rheology::ModelKind;
 use crate::session::state::{Entry, ViscometerSet};
+use crate::session::trend::{LimitCheck, checks_at_reference, spec_rate};
 use crate::session::{FlowCurve, ModelPick};
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b, h};
@@ -65,6 +66,28 @@ pub struct Shown {
     pub y: LogRange,
     /// The stress axis's unit (the site's); marks and samples are in it.
     pub y_unit: String,
+    /// The product's spec limits checked on the shown curve, as `report` checks them.
+    pub limits: Option<Limits>,
+}
+
+/// A set's product limits checked, for the limits panel.
+pub struct Limits {
+    pub product: String,
+    pub checks: Vec<LimitCheck>,
+    /// The reference temperature the curve was shifted to, K; `None`: as measured.
+    pub shifted_to_k: Option<f64>,
+}
+
+/// The set's product limits on its shown curve (`None` without a product in the config).
+fn limits_of(set: &ViscometerSet, curve: &FlowCurve, ctx: &Ctx) -> Option<Limits> {
+    let product = ctx.site.product(&set.product)?;
+    let (checks, shifted_to_k) =
+        checks_at_reference(product, &curve.fit.model, set.temperature_k);
+    Some(Limits {
+        product: product.name.clone(),
+        checks,
+        shifted_to_k,
+    })
 }
 
 pub struct CurveView {
@@ -143,6 +166,14 @@ fn choice(entry: &Entry<ViscometerSet>, pick: ModelPick, rate: Option<f64>) -> E
     })
 }
 
+/// The shear rate of the product's apparent-viscosity limit, when it has one.
+fn limit_rate(product: &crate::site::Product) -> Option<f64> {
+    product.limits.iter().find_map(|l| match l.property {
+        crate::site::LimitProperty::ApparentViscosity { .. } => Some(spec_rate(product)),
+        _ => None,
+    })
+}
+
 /// Lay out a curve's chart data, stresses in the site's stress unit.
 fn chart_of(seq: u64, pick: ModelPick, curve: &FlowCurve, style: Style) -> Shown {
     let y_unit = crate::units::display_unit(Dimension::Stress, style.system);
@@ -171,6 +202,7 @@ fn chart_of(seq: u64, pick: ModelPick, curve: &FlowCurve, style: Style) -> Shown
         x,
         y,
         y_unit: style.text(y_unit),
+        limits: None,
     }
 }
 
@@ -245,13 +277,19 @@ impl View for CurveView {
         {
             return;
         }
-        self.chart = entry
+        let new_set = self.chart.as_ref().is_none_or(|c| c.seq != entry.seq);
+        self.chart = entry.item.shown().as_ref().ok().map(|curve| Shown {
+            limits: limits_of(&entry.item, curve, ctx),
+            ..chart_of(entry.seq, pick, curve, ctx.style())
+        });
+        // The rate chosen for the set; for a new set without one, the rate of the product's
+        // apparent-viscosity limit (as `report` and `trend` use), else what the field held.
+        let spec = ctx.site.product(&entry.item.product).and_then(limit_rate);
+        let rate = entry
             .item
-            .shown()
-            .as_ref()
-            .ok()
-            .map(|curve| chart_of(entry.seq, pick, curve, ctx.style()));
-        if let Some(rate) = entry.item.shear_rate_per_s {
+            .shear_rate_per_s
+            .or(spec.filter(|_| new_set));
+        if let Some(rate) = rate {
             self.rate = Field::with_text(
                 FieldKind::Positive(Dimension::ShearRate),
                 &crate::units::significant(rate),
