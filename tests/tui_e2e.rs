@@ -30,10 +30,15 @@ struct Session {
 
 impl Session {
     fn start(args: &[&str]) -> Session {
+        Session::start_on(args, "xterm-256color")
+    }
+
+    /// The binary on a terminal of this TERM.
+    fn start_on(args: &[&str], term: &str) -> Session {
         let pty = support::pty_80x24();
         let mut cmd = CommandBuilder::new(assert_cmd::cargo::cargo_bin("rheoside"));
         cmd.args(args);
-        cmd.env("TERM", "xterm-256color");
+        cmd.env("TERM", term);
         cmd.env_remove("NO_COLOR");
         cmd.env_remove("RHEOSIDE_LOG_DIR");
         let child = pty.slave.spawn_command(cmd).expect("the binary starts");
@@ -305,6 +310,31 @@ fn every_letter_typed_on_the_readings_form_is_text() {
         ["session-start", "viscometer-set", "result", "session-end"],
         "one set, its curve, no note, no model choice"
     );
+}
+
+/// TERM=dumb implies ASCII: plain borders, tau0 and Pa.s^n spelt out, nothing above 0x7f.
+#[test]
+fn a_dumb_terminal_gets_an_ascii_screen() {
+    let logs = tempfile::tempdir().expect("a temp dir");
+    let log_dir = logs.path().to_str().expect("a UTF-8 path");
+    let mut s = Session::start_on(&["--log-dir", log_dir, "--operator", "e2e"], "dumb");
+    s.wait_for("Sample point (equipment)");
+    s.send("\r");
+    s.wait_for("* TK-1");
+    s.send("\r\t");
+    s.wait_for("Viscometer set");
+    for d in ["110", "76", "61.5", "44", "16", "14"] {
+        s.send(&format!("{d}\r"));
+    }
+    s.wait_for("5.11 1/s  7.15 Pa");
+    s.send("\x13");
+    s.wait_for("chilli-sauce  saved");
+    let text = s.wait_for_all(&["tau0 yield stress", "Pa.s^n", "R^2", "journal saved"]);
+    let bad: Vec<char> = text.chars().filter(|c| !c.is_ascii()).collect();
+    assert!(bad.is_empty(), "not ASCII under TERM=dumb: {bad:?}\n{text}");
+    assert!(text.contains("+ Model "), "{text}");
+    s.send("q");
+    assert!(s.wait_exit().success());
 }
 
 /// A signal from outside (a closed SSH session, a service stop) still flushes the journal

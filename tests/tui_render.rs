@@ -287,3 +287,55 @@ fn typing_a_digit_sends_at_most_128_bytes() {
     eprintln!("first frame {first} bytes, one typed digit {typed} bytes");
     assert!(typed <= 128, "typing one digit sent {typed} bytes");
 }
+
+/// `--ascii` (and TERM=dumb, which implies it): every character of every screen is below
+/// 0x80, the symbols spelt out (tau0, Pa.s^n, R^2, -). Walks each view and overlay with a
+/// saved set, a typed row with a check, a wrapped status and the limits panel.
+#[test]
+fn ascii_mode_prints_nothing_but_ascii_on_any_screen() {
+    let mut a = app_with(ColourMode::Plain, Glyphs::Ascii);
+    let mut screens = vec![lines(&draw(&a, 80, 24))];
+    keys(
+        &mut a,
+        &[
+            KeyCode::Enter,
+            KeyCode::Enter,
+            KeyCode::Tab,
+            KeyCode::Enter,
+            KeyCode::Up,
+        ],
+    );
+    text(&mut a, "45 C");
+    keys(&mut a, &[KeyCode::Enter]);
+    for d in ["110", "76", "61.5", "44", "16", "14"] {
+        text(&mut a, d);
+        keys(&mut a, &[KeyCode::Enter]);
+    }
+    text(&mut a, "note with a degree sign ° and a dash – typed");
+    screens.push(lines(&draw(&a, 80, 24)));
+    ctrl(&mut a, 's');
+    crate::support::journal_answers(&mut a, true);
+    let curve = lines(&draw(&a, 80, 24));
+    assert!(curve.contains("tau0 yield stress"), "{curve}");
+    assert!(curve.contains("Pa.s^n"), "{curve}");
+    assert!(curve.contains("R^2 "), "{curve}");
+    assert!(curve.contains("+/-"), "{curve}");
+    screens.push(curve);
+    // Back to the form: a refused save leaves a long status line with a dash in it.
+    keys(&mut a, &[KeyCode::BackTab, KeyCode::Enter]);
+    text(&mut a, "-3");
+    ctrl(&mut a, 's');
+    screens.push(lines(&draw(&a, 80, 24)));
+    keys(&mut a, &[KeyCode::Esc, KeyCode::Tab, KeyCode::Tab]);
+    screens.push(lines(&draw(&a, 80, 24)));
+    text(&mut a, "?");
+    screens.push(lines(&draw(&a, 80, 24)));
+    keys(&mut a, &[KeyCode::Esc]);
+    text(&mut a, "n");
+    text(&mut a, "30 °C – ok");
+    screens.push(lines(&draw(&a, 80, 24)));
+    for s in &screens {
+        let bad: Vec<char> = s.chars().filter(|c| !c.is_ascii()).collect();
+        assert!(bad.is_empty(), "not ASCII: {bad:?}\n{s}");
+    }
+}

@@ -42,6 +42,31 @@ pub fn draw(app: &App, frame: &mut Frame) {
         Overlay::ConfirmQuit { .. } => overlay::draw_confirm(frame, &app.unsaved_reasons(), t),
         Overlay::Note(field) => overlay::draw_note(frame, field, t),
     }
+    if app.ctx.style().ascii {
+        ascii_cells(frame);
+    }
+}
+
+/// Under `--ascii` or TERM=dumb, the last word on every cell: our own words are spelt in
+/// ASCII where they are drawn (tau0, Pa.s^n); what is left is text typed by the operator or
+/// names from the site config, drawn one character to a cell, so each non-ASCII character
+/// becomes one ASCII character ('-' for a dash, '?' where there is no one-letter spelling)
+/// and the cursor stays where the field put it.
+fn ascii_cells(frame: &mut Frame) {
+    let buf = frame.buffer_mut();
+    for cell in buf.content.iter_mut() {
+        let symbol = cell.symbol();
+        if symbol.is_ascii() {
+            continue;
+        }
+        let folded = crate::present::ascii_fold(symbol);
+        let one = if folded.chars().count() == 1 {
+            folded
+        } else {
+            "?".to_string()
+        };
+        cell.set_symbol(&one);
+    }
 }
 
 fn draw_top(frame: &mut Frame, area: Rect, ctx: &Ctx) {

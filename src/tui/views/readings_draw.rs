@@ -49,7 +49,7 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
             Dimension::Temperature.default_unit(),
             s::UNLESS_UNIT
         );
-        frame.render_widget(Paragraph::new(text).style(t.dim), hint);
+        frame.render_widget(Paragraph::new(ctx.style().text(&text)).style(t.dim), hint);
     }
     let speed = format!("{} ({})", s::SPEED, Dimension::Speed.default_unit());
     let header = format!(
