@@ -39,5 +39,6 @@ mod tui_e2e;
 mod tui_form;
 mod tui_keys;
 mod tui_render;
+mod tui_spot;
 mod units;
 mod units_plant;

@@ -283,9 +283,9 @@ fn every_letter_typed_on_the_readings_form_is_text() {
     let mut s = Session::start(&["--log-dir", log_dir, "--operator", "e2e"]);
     enter_the_set(&mut s);
     s.wait_for("Herschel–Bulkley (auto)");
-    // Back to Readings (Shift-Tab); Enter goes into the form at the first dial and six
-    // Downs reach Notes.
-    s.send("\x1b[Z");
+    // Back to Readings (Shift-Tab twice, past Spot); Enter goes into the form at the first
+    // dial and six Downs reach Notes.
+    s.send("\x1b[Z\x1b[Z");
     s.wait_for("Viscometer set");
     s.send("\r");
     s.send(&"\x1b[B".repeat(6));
@@ -296,7 +296,7 @@ fn every_letter_typed_on_the_readings_form_is_text() {
     // at the Flow curve view: still the automatic choice.
     s.send("\r\x1b");
     s.wait_for("Enter, Down or a digit goes into the form");
-    s.send("\t");
+    s.send("\t\t");
     s.wait_for_all(&["Herschel–Bulkley (auto)", "m model"]);
     s.send("q");
     // The note is unsaved input on the form: quitting asks first.

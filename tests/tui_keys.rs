@@ -194,7 +194,7 @@ fn every_overlay_closes_without_esc() {
 fn tab_and_shift_tab_walk_the_views() {
     let mut a = app();
     let mut seen = vec![a.active_id()];
-    for _ in 0..4 {
+    for _ in 0..5 {
         press(&mut a, KeyCode::Tab);
         seen.push(a.active_id());
     }
@@ -203,6 +203,7 @@ fn tab_and_shift_tab_walk_the_views() {
         [
             views::site::ID,
             views::readings::ID,
+            views::spot::ID,
             views::curve::ID,
             views::journal::ID,
             views::site::ID

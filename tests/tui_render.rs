@@ -144,7 +144,11 @@ fn the_flow_curve_view_says_which_spec_limits_are_out() {
     assert!(!out.is_empty());
     for c in out {
         let words = limits::check_text(c, Style::SI);
-        let flat: String = s.split_whitespace().collect::<Vec<_>>().join(" ");
+        let flat: String = s
+            .replace('│', " ")
+            .split_whitespace()
+            .collect::<Vec<_>>()
+            .join(" ");
         assert!(
             flat.contains(&format!("OUT {words}")),
             "{words} not in\n{s}"

@@ -13,6 +13,7 @@ pub mod limits;
 mod number;
 mod param;
 pub mod reason;
+pub mod spot;
 
 pub use glyph::ascii_fold;
 pub use number::{interval, quantity, r_squared, range, value_pm};

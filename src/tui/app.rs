@@ -344,6 +344,7 @@ impl App {
     }
 
     fn apply(&mut self, effects: Vec<Effect>) {
+        let picks_before = self.ctx.picks.clone();
         for effect in effects {
             match effect {
                 Effect::Status(s) => self.status = s,
@@ -358,6 +359,10 @@ impl App {
                     }
                 }
             }
+        }
+        // Views that follow the picks (the spot readings offered) see the new ones.
+        if self.ctx.picks != picks_before {
+            self.refresh_views();
         }
     }
 

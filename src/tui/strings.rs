@@ -23,6 +23,7 @@ pub mod top {
 pub mod views {
     pub const SITE: &str = "Site";
     pub const READINGS: &str = "Readings";
+    pub const SPOT: &str = "Spot";
     pub const CURVE: &str = "Flow curve";
     pub const JOURNAL: &str = "Journal";
 }
@@ -33,6 +34,7 @@ pub mod caution {
         "Sample only where it is safe to reach; the tool advises, it does not certify.";
     pub const READINGS: &str =
         "Stop the agitator before sampling; hot product: wear face and hand protection.";
+    pub const SPOT: &str = "Read gauges only where it is safe to stand; advice, not a certificate.";
     pub const CURVE: &str =
         "Check the fit against the points before acting on it; advice, not a certificate.";
     pub const JOURNAL: &str =
@@ -59,6 +61,7 @@ pub mod keys {
     pub const EDIT_FIELD: &str = "into the form";
     pub const TYPE_VALUE: &str = "type a new value into the selected field";
     pub const SAVE_SET: &str = "save set";
+    pub const SAVE_READINGS: &str = "save readings";
     pub const TO_SPEED: &str = "to the speed column of this row";
     pub const TO_DIAL: &str = "to the dial column of this row";
     pub const ADD_ROW: &str = "add a reading row";
@@ -203,6 +206,24 @@ pub mod readings {
     pub const MAX_ROWS: &str = "No more rows: ten readings is the most a set holds.";
     pub const MIN_ROWS: &str = "A set keeps at least one row.";
     pub const FORM_NAME: &str = "The readings form";
+}
+
+/// Spot readings view.
+pub mod spot {
+    pub const TITLE: &str = "Spot readings at";
+    pub const PICK_EQUIPMENT: &str =
+        "Pick a pump, a line or a tank on the Site view first: its readings are offered here.";
+    pub const PARKED_HINT: &str = "Enter, Down or a digit goes into the form; Ctrl-S journals the readings; Tab goes to the next view.";
+    pub const LEFT_FORM: &str =
+        "Left the form (the field was put back as it was); Enter or a digit goes back in.";
+    pub const NEED_EQUIPMENT: &str = "No equipment picked: pick one on the Site view first.";
+    pub const NOTHING_TYPED: &str = "Nothing typed: type at least one reading before Ctrl-S.";
+    pub const CURSOR_ON: &str = "the cursor is on";
+    pub const SENT: &str = "reading(s) sent to the journal for";
+    pub const OVER_JOURNALLED: &str =
+        "above a site limit, journalled as warnings with their caution.";
+    pub const UNLESS_UNIT: &str = "unless a unit is typed";
+    pub const FORM_NAME: &str = "The spot readings form";
 }
 
 /// Flow curve view.

@@ -87,6 +87,7 @@ macro_rules! views {
 views! {
     site::SiteView,
     readings::ReadingsView,
+    spot::SpotView,
     curve::CurveView,
     journal::JournalView,
 }
