@@ -450,3 +450,24 @@ fn the_apparent_viscosity_follows_the_typed_shear_rate() {
     let s = screen(&a);
     assert!(s.contains(&want), "{want} not in\n{s}");
 }
+
+/// `f` on the Flow curve view shows the API RP 13D field relations of a six-speed set:
+/// PV = θ600 − θ300 = 110 − 76 = 34 mPa·s, YP = θ300 − PV = 42 lbf/100 ft², pipe
+/// n = 3.322·log10(θ600/θ300) = 0.5334 (API RP 13D via Guo & Liu 2011 eqs 2.6–2.8).
+#[test]
+fn the_flow_curve_view_shows_the_field_relations_of_a_six_speed_set() {
+    let mut a = app();
+    picked(&mut a);
+    enter_dials(&mut a);
+    ctrl(&mut a, 's');
+    support::journal_answers(&mut a, true);
+    press(&mut a, KeyCode::Char('f'));
+    let s = screen(&a);
+    assert!(s.contains("Field relations (API RP 13D)"), "{s}");
+    assert!(s.contains("34.0 mPa.s"), "{s}");
+    assert!(s.contains("42.0 lbf/100 ft²"), "{s}");
+    let n = 3.322 * (110f64 / 76.0).log10();
+    assert!(s.contains(&format!("{n:.4}")), "{n:.4} not in\n{s}");
+    press(&mut a, KeyCode::Char('f'));
+    assert!(screen(&a).contains("Herschel–Bulkley (auto)"));
+}

@@ -13,6 +13,7 @@ pub mod limits;
 mod number;
 mod param;
 pub mod reason;
+pub mod relations;
 pub mod spot;
 
 pub use glyph::ascii_fold;

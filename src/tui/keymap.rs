@@ -35,6 +35,8 @@ pub enum Action {
     NextModel,
     PrevModel,
     AutoModel,
+    /// Show the API RP 13D field relations in place of the model (and back).
+    ToggleRelations,
     Accept,
     AcceptNext,
     AcceptPrev,

@@ -70,6 +70,7 @@ pub mod keys {
     pub const PREV_MODEL: &str = "previous model";
     pub const AUTO_MODEL: &str = "let the tool choose the model";
     pub const SET_RATE: &str = "new shear rate";
+    pub const FIELD_RELATIONS: &str = "field relations / model";
     pub const TYPE_RATE: &str = "type a shear rate for the apparent viscosity";
     pub const ACCEPT: &str = "accept";
     pub const ACCEPT_NEXT: &str = "next field";
@@ -254,6 +255,9 @@ pub mod curve {
     pub const RATE_INVALID: &str = "shear rate";
     pub const PM_IS_95: &str = "(± is the 95 % interval)";
     pub const LIMITS_TITLE: &str = "Spec limits,";
+    pub const RELATIONS_TITLE: &str = " Field relations (API RP 13D) ";
+    pub const RELATIONS_FROM: &str = "From the 600 and 300 rpm dials, as fit reports them.";
+    pub const NO_RELATIONS: &str = "No field relations: they need the standard six-speed instrument with 600 and 300 rpm read (not pegged).";
     pub const LIMITS_AT: &str = "at";
     pub const LIMITS_AS_MEASURED: &str = "as measured";
     pub const NO_LIMITS: &str = "No spec limits for this product in the site config.";

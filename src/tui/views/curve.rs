@@ -17,7 +17,7 @@ use crate::session::trend::{LimitCheck, checks_at_reference, spec_rate};
 use crate::session::{FlowCurve, ModelPick};
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b, h};
-use crate::tui::strings::{caution, keys, views as names};
+use crate::tui::strings::{caution, curve as s, keys, views as names};
 use crate::tui::session_log::summarize;
 use crate::tui::widgets::editing::{self, EditStep};
 use crate::tui::widgets::field::{Field, FieldKind};
@@ -37,6 +37,12 @@ const KEYS: &[Binding] = &[
     h(Scope::View, &[Key::Char('A')], Action::AutoModel, keys::AUTO_MODEL),
     b(Scope::View, &[Key::Char('r'), Key::Enter], Action::Activate, keys::SET_RATE),
     h(Scope::View, &[Key::Digit], Action::Type('0'), keys::TYPE_RATE),
+    b(
+        Scope::View,
+        &[Key::Char('f')],
+        Action::ToggleRelations,
+        keys::FIELD_RELATIONS,
+    ),
 ];
 
 /// The model choices in the order `m` steps through them.
@@ -94,6 +100,8 @@ pub struct CurveView {
     chart: Option<Shown>,
     rate: Field,
     editing: bool,
+    /// The model panel shows the API RP 13D field relations instead of the model.
+    relations: bool,
 }
 
 impl CurveView {
@@ -102,6 +110,7 @@ impl CurveView {
             chart: None,
             rate: Field::with_text(FieldKind::Positive(Dimension::ShearRate), DEFAULT_RATE),
             editing: false,
+            relations: false,
         }
     }
 
@@ -149,6 +158,22 @@ impl CurveView {
             .unwrap_or(0) as isize;
         let next = PICKS[(at + step).rem_euclid(PICKS.len() as isize) as usize];
         vec![choice(entry, next, self.rate_now(&entry.item))]
+    }
+}
+
+impl CurveView {
+    fn toggle_relations(&mut self, ctx: &Ctx) -> Vec<Effect> {
+        let has = ctx
+            .session
+            .latest_set()
+            .and_then(|e| e.item.shown().as_ref().ok())
+            .is_some_and(|c| c.api_rp13d.is_some());
+        if !has {
+            self.relations = false;
+            return vec![Effect::Status(s::NO_RELATIONS.to_string())];
+        }
+        self.relations = !self.relations;
+        Vec::new()
     }
 }
 
@@ -248,6 +273,7 @@ impl View for CurveView {
                 Some(e) => vec![choice(e, ModelPick::Auto, self.rate_now(&e.item))],
                 None => Vec::new(),
             },
+            Action::ToggleRelations => self.toggle_relations(ctx),
             // A new rate is typed from scratch (Esc brings the old one back).
             Action::Activate => {
                 self.rate.begin_edit();
@@ -305,6 +331,7 @@ impl View for CurveView {
             rate: &self.rate,
             apparent_at: entry.and_then(|e| self.rate_now(&e.item)),
             editing: self.editing,
+            relations: self.relations,
         };
         view.draw(frame, area, ctx);
     }

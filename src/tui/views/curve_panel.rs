@@ -36,6 +36,8 @@ pub struct CurveScreen<'a> {
     /// The shear rate the apparent viscosity is shown at.
     pub apparent_at: Option<f64>,
     pub editing: bool,
+    /// Show the field relations in the model panel.
+    pub relations: bool,
 }
 
 impl CurveScreen<'_> {
@@ -101,6 +103,29 @@ impl CurveScreen<'_> {
 
     fn draw_panel(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
         let t = &ctx.theme;
+        let relations = self
+            .entry
+            .and_then(|e| e.item.shown().as_ref().ok())
+            .and_then(|c| c.api_rp13d.as_ref())
+            .filter(|_| self.relations);
+        if let Some(a) = relations {
+            let style = ctx.style();
+            let mut lines = vec![self.set_line(ctx)];
+            for (label, value) in present::relations::field_relations(a, style) {
+                lines.push(Line::styled(label, t.dim));
+                lines.push(Line::raw(format!("   {value}")));
+            }
+            lines.push(Line::styled(s::RELATIONS_FROM, t.dim));
+            lines.push(Line::styled(
+                style.text(crate::session::api_rp13d::CONVERSION_NOTE),
+                t.dim,
+            ));
+            let p = Paragraph::new(lines)
+                .wrap(Wrap { trim: false })
+                .block(t.panel(s::RELATIONS_TITLE));
+            frame.render_widget(p, area);
+            return;
+        }
         let outer = t.panel(s::MODEL_TITLE);
         let inner = outer.inner(area);
         frame.render_widget(outer, area);
