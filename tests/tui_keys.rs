@@ -471,3 +471,49 @@ fn the_flow_curve_view_shows_the_field_relations_of_a_six_speed_set() {
     press(&mut a, KeyCode::Char('f'));
     assert!(screen(&a).contains("Herschel–Bulkley (auto)"));
 }
+
+fn add_note(a: &mut App, text: &str) {
+    press(a, KeyCode::Char('n'));
+    type_text(a, text);
+    press(a, KeyCode::Enter);
+    support::journal_answers(a, true);
+}
+
+/// The Journal view follows new records past its height, stops following once moved up,
+/// follows again with End, and Enter opens the selected record in full (every field of it,
+/// wrapped, never cut at the panel edge).
+#[test]
+fn the_journal_follows_new_records_and_opens_one_in_full() {
+    let mut a = app();
+    press(&mut a, KeyCode::BackTab);
+    assert_eq!(a.active_id(), views::journal::ID);
+    for i in 1..=25 {
+        add_note(&mut a, &format!("note number {i}"));
+    }
+    assert!(screen(&a).contains("note number 25"), "{}", screen(&a));
+    press(&mut a, KeyCode::Up);
+    add_note(&mut a, "note number 26");
+    assert!(
+        !screen(&a).contains("note number 26"),
+        "moved up: not followed"
+    );
+    press(&mut a, KeyCode::End);
+    assert!(screen(&a).contains("note number 26"));
+    let long = "the sauce line L-1 was warm to the touch past the second bend and the operator \
+                on shift asked for the lagging to be checked before the next batch";
+    add_note(&mut a, long);
+    press(&mut a, KeyCode::Enter);
+    let s = screen(&a);
+    let flat: String = s
+        .replace('│', " ")
+        .split_whitespace()
+        .collect::<Vec<_>>()
+        .join(" ");
+    assert!(flat.contains("\"kind\": \"note\""), "{s}");
+    assert!(
+        flat.contains("next batch"),
+        "the whole note is readable:\n{s}"
+    );
+    press(&mut a, KeyCode::Esc);
+    assert!(!screen(&a).contains("\"kind\""));
+}

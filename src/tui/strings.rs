@@ -62,6 +62,8 @@ pub mod keys {
     pub const TYPE_VALUE: &str = "type a new value into the selected field";
     pub const SAVE_SET: &str = "save set";
     pub const SAVE_READINGS: &str = "save readings";
+    pub const OPEN_RECORD: &str = "open the record in full";
+    pub const CLOSE_RECORD: &str = "close the record";
     pub const TO_SPEED: &str = "to the speed column of this row";
     pub const TO_DIAL: &str = "to the dial column of this row";
     pub const ADD_ROW: &str = "add a reading row";
@@ -272,6 +274,9 @@ pub mod journal {
     pub const TITLE: &str = " Session journal ";
     pub const FILE: &str = "file";
     pub const EMPTY: &str = "Nothing recorded yet.";
+    pub const RECORD_TITLE: &str = " Record (Up/Down scroll, Esc or Enter closes) ";
+    pub const NOT_NUMBERED: &str = "Not yet numbered by the journal: it is still being written.";
+    pub const OPENED: &str = "The selected record in full; Up/Down scroll it, Esc closes it.";
     pub const SAVED: &str = "saved";
     pub const SENDING: &str = "sending";
     pub const UNSAVED: &str = "UNSAVED";
