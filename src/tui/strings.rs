@@ -183,13 +183,14 @@ pub mod readings {
     pub const NEED_READING: &str = "No dial reading entered: type at least one dial value.";
     pub const DIAL_NEEDS_SPEED: &str = "a dial reading needs a speed";
     pub const NEGATIVE_DIAL: &str = "a dial reading cannot be negative; type 0 or more";
-    pub const PEGGED: &str = "at full scale (pegged): not valid; read at a lower speed";
+    pub const PEGGED: &str =
+        "at full scale (pegged): left out of the fit; read it again at a lower speed";
     pub const LOW_SCALE: &str = "below 10 % of scale: low accuracy";
     pub const SPEED_RANGE: &str = "speed outside this instrument's";
     pub const ABOVE_FASTER: &str = "above the reading at a higher speed, row";
     pub const ROW: &str = "row";
     pub const NEGATIVE_SHORT: &str = "negative";
-    pub const PEGGED_SHORT: &str = "pegged";
+    pub const PEGGED_SHORT: &str = "pegged: left out";
     pub const LOW_SCALE_SHORT: &str = "low on scale";
     pub const RANGE_SHORT: &str = "outside";
     pub const ABOVE_SHORT: &str = "above row";
