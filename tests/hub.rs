@@ -63,7 +63,8 @@ fn save_set(app: &mut App) -> Vec<Record> {
         type_text(app, d);
         press(app, KeyCode::Enter);
     }
-    press(app, KeyCode::Char('s'));
+    // Ctrl-S saves from anywhere in the form (a plain `s` would type).
+    app.on_key(&KeyEvent::new(KeyCode::Char('s'), KeyModifiers::CONTROL));
     support::journal_answers(app, true)
 }
 

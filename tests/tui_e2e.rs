@@ -30,10 +30,15 @@ struct Session {
 
 impl Session {
     fn start(args: &[&str]) -> Session {
+        Session::start_on(args, "xterm-256color")
+    }
+
+    /// The binary on a terminal of this TERM.
+    fn start_on(args: &[&str], term: &str) -> Session {
         let pty = support::pty_80x24();
         let mut cmd = CommandBuilder::new(assert_cmd::cargo::cargo_bin("rheoside"));
         cmd.args(args);
-        cmd.env("TERM", "xterm-256color");
+        cmd.env("TERM", term);
         cmd.env_remove("NO_COLOR");
         cmd.env_remove("RHEOSIDE_LOG_DIR");
         let child = pty.slave.spawn_command(cmd).expect("the binary starts");
@@ -164,8 +169,11 @@ fn enter_the_set(s: &mut Session) -> String {
     for d in ["110", "76", "61.5", "44", "16", "14"] {
         s.send(&format!("{d}\r"));
     }
-    s.wait_for("0.314 rad/s");
-    s.send("s");
+    // Row 6 shows what it will store: 3 rpm x 1.7023 = 5.11 1/s, 14 x 0.511 = 7.15 Pa
+    // (API RP 13D standard geometry constants).
+    s.wait_for("5.11 1/s  7.15 Pa");
+    // Ctrl-S (0x13) saves; a plain `s` would type into the field.
+    s.send("\x13");
     // The set's own line says "saved" only once the writer thread has fsynced it, and the
     // top bar once the curve journalled after it is on disk too.
     s.wait_for("chilli-sauce  saved");
@@ -214,6 +222,7 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
     assert!((by("K").unwrap_or(0.0) - 0.8).abs() < 0.08);
     assert!((by("n").unwrap_or(0.0) - 0.6).abs() < 0.06);
 
+    // The save left the form, so `q` is a key again.
     s.send("q");
     let status = s.wait_exit();
     assert!(
@@ -263,6 +272,69 @@ fn an_operator_enters_a_set_sees_its_fit_and_quits() {
         journal.records.last().map(|r| &r.payload),
         Some(Payload::SessionEnd)
     ));
+}
+
+/// Letters are text on the form (issue 8): after a saved set, a note with every letter a-z
+/// typed into Notes saves nothing, opens nothing and leaves the model as it was.
+#[test]
+fn every_letter_typed_on_the_readings_form_is_text() {
+    let logs = tempfile::tempdir().expect("a temp dir");
+    let log_dir = logs.path().to_str().expect("a UTF-8 path");
+    let mut s = Session::start(&["--log-dir", log_dir, "--operator", "e2e"]);
+    enter_the_set(&mut s);
+    s.wait_for("Herschel–Bulkley (auto)");
+    // Back to Readings (Shift-Tab twice, past Spot); Enter goes into the form at the first
+    // dial and six Downs reach Notes.
+    s.send("\x1b[Z\x1b[Z");
+    s.wait_for("Viscometer set");
+    s.send("\r");
+    s.send(&"\x1b[B".repeat(6));
+    let note = "sampled: the quick brown fox jumps over the lazy dog";
+    s.send(note);
+    s.wait_for(note);
+    // Accept the note (Enter goes on to the Save set line), leave the form (Esc), and look
+    // at the Flow curve view: still the automatic choice.
+    s.send("\r\x1b");
+    s.wait_for("Enter, Down or a digit goes into the form");
+    s.send("\t\t");
+    s.wait_for_all(&["Herschel–Bulkley (auto)", "m model"]);
+    s.send("q");
+    // The note is unsaved input on the form: quitting asks first.
+    s.wait_for("The readings form has input that is not saved");
+    s.send("y");
+    assert!(s.wait_exit().success());
+    let journal = load(&journal_in(logs.path())).expect("the journal reads back");
+    let kinds: Vec<&str> = journal.records.iter().map(|r| r.payload.kind()).collect();
+    assert_eq!(
+        kinds,
+        ["session-start", "viscometer-set", "result", "session-end"],
+        "one set, its curve, no note, no model choice"
+    );
+}
+
+/// TERM=dumb implies ASCII: plain borders, tau0 and Pa.s^n spelt out, nothing above 0x7f.
+#[test]
+fn a_dumb_terminal_gets_an_ascii_screen() {
+    let logs = tempfile::tempdir().expect("a temp dir");
+    let log_dir = logs.path().to_str().expect("a UTF-8 path");
+    let mut s = Session::start_on(&["--log-dir", log_dir, "--operator", "e2e"], "dumb");
+    s.wait_for("Sample point (equipment)");
+    s.send("\r");
+    s.wait_for("* TK-1");
+    s.send("\r\t");
+    s.wait_for("Viscometer set");
+    for d in ["110", "76", "61.5", "44", "16", "14"] {
+        s.send(&format!("{d}\r"));
+    }
+    s.wait_for("5.11 1/s  7.15 Pa");
+    s.send("\x13");
+    s.wait_for("chilli-sauce  saved");
+    let text = s.wait_for_all(&["tau0 yield stress", "Pa.s^n", "R^2", "journal saved"]);
+    let bad: Vec<char> = text.chars().filter(|c| !c.is_ascii()).collect();
+    assert!(bad.is_empty(), "not ASCII under TERM=dumb: {bad:?}\n{text}");
+    assert!(text.contains("+ Model "), "{text}");
+    s.send("q");
+    assert!(s.wait_exit().success());
 }
 
 /// A signal from outside (a closed SSH session, a service stop) still flushes the journal
@@ -447,8 +519,8 @@ fn the_pump_will_not_start_after_a_stop_end_to_end() {
     s.wait_for("* L-2");
     s.send("\x1b[B\r");
     s.wait_for("* filler-paste");
-    // Tab through Readings, Flow curve and Line to Restart.
-    s.send("\t\t\t\t");
+    // Tab through Readings, Spot, Flow curve and Line to Restart.
+    s.send("\t\t\t\t\t");
     s.wait_for_all(&["< L-2 >", "< P-2 >", "Gel readings"]);
     // Down twice into the first gel stress; Tab, Tab to the next row's gel stress.
     s.send("\x1b[B\x1b[B");

@@ -32,6 +32,18 @@ fn press(app: &mut App, code: KeyCode) {
     app.on_key(&event(code, KeyModifiers::NONE, KeyEventKind::Press));
 }
 
+fn ctrl(app: &mut App, c: char) {
+    app.on_key(&event(
+        KeyCode::Char(c),
+        KeyModifiers::CONTROL,
+        KeyEventKind::Press,
+    ));
+}
+
+fn ctrl_arrow(app: &mut App, code: KeyCode) {
+    app.on_key(&event(code, KeyModifiers::CONTROL, KeyEventKind::Press));
+}
+
 fn ctrl_c(app: &mut App) {
     app.on_key(&event(
         KeyCode::Char('c'),
@@ -91,6 +103,8 @@ fn q_with_unsaved_input_asks_first() {
     picked(&mut a);
     type_text(&mut a, "52");
     press(&mut a, KeyCode::Enter);
+    // In the form `q` types; Esc leaves it (the accepted 52 stays), then `q` asks.
+    press(&mut a, KeyCode::Esc);
     press(&mut a, KeyCode::Char('q'));
     assert_eq!(a.state(), RunState::Running);
     assert_eq!(*a.overlay(), Overlay::ConfirmQuit { note: None });
@@ -169,10 +183,10 @@ fn every_overlay_closes_without_esc() {
     press(&mut a, KeyCode::Enter);
     assert_eq!(*a.overlay(), Overlay::None);
     assert!(a.take_outbox().is_empty());
-    // A field being typed into is left with Enter.
+    // The form is left with Esc.
     picked(&mut a);
     type_text(&mut a, "4");
-    press(&mut a, KeyCode::Enter);
+    press(&mut a, KeyCode::Esc);
     assert!(matches!(a.context(), Context::Top(views::readings::ID)));
 }
 
@@ -189,6 +203,7 @@ fn tab_and_shift_tab_walk_the_views() {
         [
             views::site::ID,
             views::readings::ID,
+            views::spot::ID,
             views::curve::ID,
             views::line::ID,
             views::restart::ID,
@@ -204,12 +219,13 @@ fn tab_and_shift_tab_walk_the_views() {
 fn a_set_goes_to_the_journal_and_its_curve_is_shown() {
     let mut a = app();
     picked(&mut a);
-    enter_dials(&mut a);
-    press(&mut a, KeyCode::Home);
-    press(&mut a, KeyCode::Down);
+    // Into the form at the first dial, Up to the temperature, Enter back down to the dial.
+    press(&mut a, KeyCode::Enter);
+    press(&mut a, KeyCode::Up);
     type_text(&mut a, "45 C");
     press(&mut a, KeyCode::Enter);
-    press(&mut a, KeyCode::Char('s'));
+    enter_dials(&mut a);
+    ctrl(&mut a, 's');
     // Numbered by the journal but not yet on disk: the curve is shown, not called saved.
     let out = support::journal_answers(&mut a, false);
     assert_eq!(a.active_id(), views::curve::ID);
@@ -249,7 +265,7 @@ fn the_model_can_be_switched_by_hand_and_back() {
     let mut a = app();
     picked(&mut a);
     enter_dials(&mut a);
-    press(&mut a, KeyCode::Char('s'));
+    ctrl(&mut a, 's');
     support::journal_answers(&mut a, true);
     press(&mut a, KeyCode::Char('m'));
     support::journal_answers(&mut a, true);
@@ -266,14 +282,14 @@ fn the_model_can_be_switched_by_hand_and_back() {
 fn a_wrong_unit_is_refused_in_words_and_the_set_is_not_saved() {
     let mut a = app();
     picked(&mut a);
-    press(&mut a, KeyCode::Left);
-    type_text(&mut a, "600 psi");
     press(&mut a, KeyCode::Enter);
-    press(&mut a, KeyCode::Up);
-    press(&mut a, KeyCode::Right);
+    press(&mut a, KeyCode::Left);
+    ctrl_arrow(&mut a, KeyCode::Left);
+    type_text(&mut a, "600 psi");
+    ctrl_arrow(&mut a, KeyCode::Right);
     type_text(&mut a, "110");
     press(&mut a, KeyCode::Enter);
-    press(&mut a, KeyCode::Char('s'));
+    ctrl(&mut a, 's');
     assert!(a.take_outbox().is_empty());
     assert_eq!(a.active_id(), views::readings::ID);
     assert!(a.status().starts_with("row 1 Speed:"), "{}", a.status());
@@ -285,7 +301,7 @@ fn saving_needs_a_product() {
     let mut a = app();
     press(&mut a, KeyCode::Tab);
     enter_dials(&mut a);
-    press(&mut a, KeyCode::Char('s'));
+    ctrl(&mut a, 's');
     assert!(a.take_outbox().is_empty());
     assert!(a.status().contains("No product picked"));
 }
@@ -371,7 +387,10 @@ fn a_note_being_typed_survives_saying_no_to_quitting() {
 fn another_viscometer_takes_its_own_speeds() {
     let mut a = app();
     picked(&mut a);
-    press(&mut a, KeyCode::Home);
+    // Into the form, up past the temperature to the viscometer, Right to the next one.
+    press(&mut a, KeyCode::Enter);
+    press(&mut a, KeyCode::Up);
+    press(&mut a, KeyCode::Up);
     press(&mut a, KeyCode::Right);
     let s = screen(&a);
     assert!(s.contains("< VIS-B >"), "{s}");
@@ -381,8 +400,13 @@ fn another_viscometer_takes_its_own_speeds() {
     press(&mut a, KeyCode::Down);
     type_text(&mut a, "50");
     press(&mut a, KeyCode::Enter);
-    press(&mut a, KeyCode::Char('s'));
-    assert_eq!(a.status(), "row 1 Speed: a dial reading needs a speed");
+    ctrl(&mut a, 's');
+    assert!(
+        a.status()
+            .starts_with("row 1 Speed: a dial reading needs a speed"),
+        "{}",
+        a.status()
+    );
 }
 
 #[test]
@@ -390,7 +414,7 @@ fn the_apparent_viscosity_follows_the_typed_shear_rate() {
     let mut a = app();
     picked(&mut a);
     enter_dials(&mut a);
-    press(&mut a, KeyCode::Char('s'));
+    ctrl(&mut a, 's');
     support::journal_answers(&mut a, true);
     type_text(&mut a, "r1000");
     press(&mut a, KeyCode::Enter);
@@ -427,4 +451,71 @@ fn the_apparent_viscosity_follows_the_typed_shear_rate() {
     );
     let s = screen(&a);
     assert!(s.contains(&want), "{want} not in\n{s}");
+}
+
+/// `f` on the Flow curve view shows the API RP 13D field relations of a six-speed set:
+/// PV = θ600 − θ300 = 110 − 76 = 34 mPa·s, YP = θ300 − PV = 42 lbf/100 ft², pipe
+/// n = 3.322·log10(θ600/θ300) = 0.5334 (API RP 13D via Guo & Liu 2011 eqs 2.6–2.8).
+#[test]
+fn the_flow_curve_view_shows_the_field_relations_of_a_six_speed_set() {
+    let mut a = app();
+    picked(&mut a);
+    enter_dials(&mut a);
+    ctrl(&mut a, 's');
+    support::journal_answers(&mut a, true);
+    press(&mut a, KeyCode::Char('f'));
+    let s = screen(&a);
+    assert!(s.contains("Field relations (API RP 13D)"), "{s}");
+    assert!(s.contains("34.0 mPa.s"), "{s}");
+    assert!(s.contains("42.0 lbf/100 ft²"), "{s}");
+    let n = 3.322 * (110f64 / 76.0).log10();
+    assert!(s.contains(&format!("{n:.4}")), "{n:.4} not in\n{s}");
+    press(&mut a, KeyCode::Char('f'));
+    assert!(screen(&a).contains("Herschel–Bulkley (auto)"));
+}
+
+fn add_note(a: &mut App, text: &str) {
+    press(a, KeyCode::Char('n'));
+    type_text(a, text);
+    press(a, KeyCode::Enter);
+    support::journal_answers(a, true);
+}
+
+/// The Journal view follows new records past its height, stops following once moved up,
+/// follows again with End, and Enter opens the selected record in full (every field of it,
+/// wrapped, never cut at the panel edge).
+#[test]
+fn the_journal_follows_new_records_and_opens_one_in_full() {
+    let mut a = app();
+    press(&mut a, KeyCode::BackTab);
+    assert_eq!(a.active_id(), views::journal::ID);
+    for i in 1..=25 {
+        add_note(&mut a, &format!("note number {i}"));
+    }
+    assert!(screen(&a).contains("note number 25"), "{}", screen(&a));
+    press(&mut a, KeyCode::Up);
+    add_note(&mut a, "note number 26");
+    assert!(
+        !screen(&a).contains("note number 26"),
+        "moved up: not followed"
+    );
+    press(&mut a, KeyCode::End);
+    assert!(screen(&a).contains("note number 26"));
+    let long = "the sauce line L-1 was warm to the touch past the second bend and the operator \
+                on shift asked for the lagging to be checked before the next batch";
+    add_note(&mut a, long);
+    press(&mut a, KeyCode::Enter);
+    let s = screen(&a);
+    let flat: String = s
+        .replace('│', " ")
+        .split_whitespace()
+        .collect::<Vec<_>>()
+        .join(" ");
+    assert!(flat.contains("\"kind\": \"note\""), "{s}");
+    assert!(
+        flat.contains("next batch"),
+        "the whole note is readable:\n{s}"
+    );
+    press(&mut a, KeyCode::Esc);
+    assert!(!screen(&a).contains("\"kind\""));
 }

@@ -14,7 +14,9 @@ pub mod limits;
 mod number;
 mod param;
 pub mod reason;
+pub mod relations;
 pub mod restart_json;
+pub mod spot;
 
 pub use glyph::ascii_fold;
 pub use number::{interval, quantity, r_squared, range, value_pm};

@@ -29,6 +29,7 @@ mod restart_site;
 pub mod restart_words;
 pub mod rheology_shift;
 pub mod rheology_source;
+pub mod spot;
 pub mod state;
 pub mod tank;
 pub mod tank_input;

@@ -192,6 +192,19 @@ pub fn at_reference(
     }
 }
 
+/// A set's curve checked against its product's limits exactly as `report` and `trend` do:
+/// at the product's reference temperature when it can be shifted there (see
+/// [`at_reference`]), else as measured. Returns the checks and the temperature they were
+/// shifted to, if any.
+pub fn checks_at_reference(
+    product: &Product,
+    model: &Model,
+    temperature_k: Option<f64>,
+) -> (Vec<LimitCheck>, Option<f64>) {
+    let (model, shifted_to) = at_reference(product, model, temperature_k);
+    (check_limits(&product.limits, &model), shifted_to)
+}
+
 /// The constants of one fitted set.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Constants {

@@ -98,6 +98,9 @@ pub struct Viscometer {
     pub id: String,
     pub geometry: Geometry,
     pub description: String,
+    /// The speeds the instrument runs at, rpm (lowest, highest): fixed at 3 to 600 for the
+    /// standard six-speed; for other geometries from `min_speed` / `max_speed` when given.
+    pub speed_range_rpm: Option<(f64, f64)>,
 }
 
 /// A pipeline.

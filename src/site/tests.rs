@@ -190,6 +190,22 @@ fn viscometer_rules() {
     one_error_containing(&spindle_key, "used only with geometry 'spindle'");
     let factor = format!("{coax}full_scale_torque = \"10 mN.m\"\nend_effect_factor = 0.8\n");
     one_error_containing(&factor, "must be between 1 and 2");
+    let with_torque = format!("{coax}full_scale_torque = \"10 mN.m\"\n");
+    let half = format!("{with_torque}min_speed = \"1 rpm\"\n");
+    one_error_containing(&half, "given without max_speed");
+    let reversed = format!("{with_torque}min_speed = \"100 rpm\"\nmax_speed = \"10 rpm\"\n");
+    one_error_containing(&reversed, "must be above min_speed");
+    let std_range = "[[viscometer]]\nid = \"V\"\ngeometry = \"standard-six-speed\"\n\
+                     max_speed = \"900 rpm\"\n";
+    one_error_containing(std_range, "it runs at 3 to 600 rpm");
+    let ranged = format!("{with_torque}min_speed = \"0.5 rpm\"\nmax_speed = \"200 rpm\"\n");
+    let site =
+        load_str(&format!("{HEAD}{ranged}"), "t.toml").expect("a coaxial with a speed range");
+    let (lo, hi) = site.viscometers[0].speed_range_rpm.expect("a range");
+    assert!(
+        (lo - 0.5).abs() < 1e-9 && (hi - 200.0).abs() < 1e-9,
+        "{lo} {hi}"
+    );
 }
 
 const PUMP: &str = "[[pump]]\nid = \"P\"\nkind = \"centrifugal\"\nfeeds = \"L-1\"\n\

@@ -21,7 +21,16 @@ pub(crate) const VISCOMETER_KEYS: &[&str] = &[
     "full_scale_torque",
     "full_scale_dial",
     "end_effect_factor",
+    "min_speed",
+    "max_speed",
 ];
+
+/// The standard six-speed instrument runs from 3 to 600 rpm (API RP 13D field viscometer,
+/// from memory).
+pub const STANDARD_SPEED_RANGE_RPM: (f64, f64) = (3.0, 600.0);
+
+/// rad/s per rpm (definition of the revolution per minute).
+const RAD_S_PER_RPM: f64 = std::f64::consts::PI / 30.0;
 
 /// Accepted end-effect factors (effective / geometric length); end effects only add torque.
 const END_EFFECT_RANGE: (f64, f64) = (1.0, 2.0);
@@ -59,20 +68,64 @@ const SPRING_KEYS: [&str; 4] = [
 pub(crate) fn build(mut t: RawTable, sink: &mut Sink) -> Option<Viscometer> {
     let (id, description) = t.identity(sink);
     let kind = t.choice(sink, "geometry", &KINDS, Need::Required);
-    let geometry = match kind? {
+    let kind = kind?;
+    let geometry = match kind {
         Kind::Standard => standard(&t, sink),
         Kind::Coaxial => coaxial(&t, sink),
         Kind::Spindle => spindle(&t, sink),
+    };
+    let speed_range_rpm = match kind {
+        Kind::Standard => Some(STANDARD_SPEED_RANGE_RPM),
+        Kind::Coaxial | Kind::Spindle => speed_range(&t, sink),
     };
     Some(Viscometer {
         id: id?,
         geometry: geometry?,
         description,
+        speed_range_rpm,
     })
+}
+
+/// `min_speed` and `max_speed` of a coaxial or spindle instrument, rpm, when both are given
+/// and the lowest is below the highest.
+fn speed_range(t: &RawTable, sink: &mut Sink) -> Option<(f64, f64)> {
+    let speed = |key, sink: &mut Sink| {
+        t.quantity(sink, key, Dimension::Speed, Rule::Positive, Need::Optional)
+    };
+    let lo = speed("min_speed", sink);
+    let hi = speed("max_speed", sink);
+    match (lo, hi, t.has("min_speed"), t.has("max_speed")) {
+        (Some(lo), Some(hi), _, _) if lo < hi => Some((lo / RAD_S_PER_RPM, hi / RAD_S_PER_RPM)),
+        (Some(_), Some(_), _, _) => {
+            let msg = "must be above min_speed".to_string();
+            t.fail(sink, "max_speed", ErrorKind::BadValue, msg);
+            None
+        }
+        (_, _, true, false) | (_, _, false, true) => {
+            let missing = if t.has("min_speed") {
+                "max_speed"
+            } else {
+                "min_speed"
+            };
+            let present = if t.has("min_speed") {
+                "min_speed"
+            } else {
+                "max_speed"
+            };
+            let msg = format!("given without {missing}; give both, or neither");
+            t.fail(sink, present, ErrorKind::BadValue, msg);
+            None
+        }
+        _ => None,
+    }
 }
 
 fn standard(t: &RawTable, sink: &mut Sink) -> Option<Geometry> {
     refuse_others(t, Kind::Standard, sink);
+    for key in ["min_speed", "max_speed"].iter().filter(|k| t.has(k)) {
+        let msg = "not used with geometry 'standard-six-speed' (it runs at 3 to 600 rpm)";
+        t.fail(sink, key, ErrorKind::BadValue, msg.into());
+    }
     for key in SPRING_KEYS.iter().filter(|k| t.has(k)) {
         let msg = "not used with geometry 'standard-six-speed' (its rotor, bob and spring are \
                    fixed); use geometry 'coaxial' for other dimensions";

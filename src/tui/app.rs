@@ -255,6 +255,9 @@ impl App {
         let Some(key) = Key::from_event(ev) else {
             return;
         };
+        // Every key press starts with a clear status line: a message belongs to the action
+        // that caused it, never to a later one.
+        self.status.clear();
         let context = self.context();
         let view_keys = self.active_view().keys();
         let Some(action) = keymap::lookup(context, key, view_keys) else {
@@ -348,6 +351,7 @@ impl App {
     }
 
     fn apply(&mut self, effects: Vec<Effect>) {
+        let picks_before = self.ctx.picks.clone();
         for effect in effects {
             match effect {
                 Effect::Status(s) => self.status = s,
@@ -368,6 +372,10 @@ impl App {
                     }
                 }
             }
+        }
+        // Views that follow the picks (the spot readings offered) see the new ones.
+        if self.ctx.picks != picks_before {
+            self.refresh_views();
         }
     }
 

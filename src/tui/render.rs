@@ -24,13 +24,14 @@ pub fn draw(app: &App, frame: &mut Frame) {
     }
     let t = &app.ctx.theme;
     if layout::fits(area) {
-        let r = Regions::split(area);
+        let status = status_text(app);
+        let r = Regions::with_status(area, layout::wrapped_lines(&status.0, area.width));
         draw_top(frame, r.top, &app.ctx);
         draw_tabs(frame, r.tabs, app);
         app.active_view().render(frame, r.body, &app.ctx);
         let caution = Paragraph::new(app.active_view().caution()).style(t.caution);
         frame.render_widget(caution, r.caution);
-        draw_status(frame, r.status, app);
+        draw_status(frame, r.status, status);
         draw_footer(frame, r.footer, app);
     } else {
         draw_too_small(frame, area, t);
@@ -40,6 +41,31 @@ pub fn draw(app: &App, frame: &mut Frame) {
         Overlay::Help { scroll } => overlay::draw_help(frame, *scroll, app.views(), t),
         Overlay::ConfirmQuit { .. } => overlay::draw_confirm(frame, &app.unsaved_reasons(), t),
         Overlay::Note(field) => overlay::draw_note(frame, field, t),
+    }
+    if app.ctx.style().ascii {
+        ascii_cells(frame);
+    }
+}
+
+/// Under `--ascii` or TERM=dumb, the last word on every cell: our own words are spelt in
+/// ASCII where they are drawn (tau0, Pa.s^n); what is left is text typed by the operator or
+/// names from the site config, drawn one character to a cell, so each non-ASCII character
+/// becomes one ASCII character ('-' for a dash, '?' where there is no one-letter spelling)
+/// and the cursor stays where the field put it.
+fn ascii_cells(frame: &mut Frame) {
+    let buf = frame.buffer_mut();
+    for cell in buf.content.iter_mut() {
+        let symbol = cell.symbol();
+        if symbol.is_ascii() {
+            continue;
+        }
+        let folded = crate::present::ascii_fold(symbol);
+        let one = if folded.chars().count() == 1 {
+            folded
+        } else {
+            "?".to_string()
+        };
+        cell.set_symbol(&one);
     }
 }
 
@@ -115,13 +141,20 @@ fn draw_tabs(frame: &mut Frame, area: Rect, app: &App) {
     frame.render_widget(Paragraph::new(Line::from(spans)), area);
 }
 
-fn draw_status(frame: &mut Frame, area: Rect, app: &App) {
+/// The status message as drawn (cleaned, in ASCII when asked) and its style.
+fn status_text(app: &App) -> (String, ratatui::style::Style) {
     let t = &app.ctx.theme;
     let (text, style) = match app.ctx.log.state(&app.ctx.session) {
         JournalState::Error { message, .. } => (message, t.error),
         _ => (app.status().to_string(), t.base),
     };
-    frame.render_widget(Paragraph::new(sanitize(&text, false)).style(style), area);
+    (app.ctx.style().text(&sanitize(&text, false)), style)
+}
+
+/// The status message, wrapped at word boundaries into the lines made for it.
+fn draw_status(frame: &mut Frame, area: Rect, (text, style): (String, ratatui::style::Style)) {
+    let p = Paragraph::new(text).style(style).wrap(Wrap { trim: true });
+    frame.render_widget(p, area);
 }
 
 /// The footer: as many of the context's bindings as fit, in key-map order.

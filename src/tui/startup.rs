@@ -54,11 +54,7 @@ pub fn prepare(cli: &TuiOptions) -> anyhow::Result<Result<Start, ExitCode>> {
         Err(code) => return Ok(Err(code)),
     };
     let operator = cli.operator.clone().unwrap_or_else(crate::journal::os_user);
-    let glyphs = if cli.ascii {
-        Glyphs::Ascii
-    } else {
-        Glyphs::Unicode
-    };
+    let glyphs = Glyphs::detect(cli.ascii);
     let theme = Theme::new(ColourMode::detect(), glyphs);
     let now = chrono::Local::now().fixed_offset();
     let Some(resume) = &cli.resume else {

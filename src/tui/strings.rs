@@ -23,6 +23,7 @@ pub mod top {
 pub mod views {
     pub const SITE: &str = "Site";
     pub const READINGS: &str = "Readings";
+    pub const SPOT: &str = "Spot";
     pub const CURVE: &str = "Flow curve";
     pub const JOURNAL: &str = "Journal";
     pub const RESTART: &str = "Restart";
@@ -35,6 +36,7 @@ pub mod caution {
         "Sample only where it is safe to reach; the tool advises, it does not certify.";
     pub const READINGS: &str =
         "Stop the agitator before sampling; hot product: wear face and hand protection.";
+    pub const SPOT: &str = "Read gauges only where it is safe to stand; advice, not a certificate.";
     pub const CURVE: &str =
         "Check the fit against the points before acting on it; advice, not a certificate.";
     pub const JOURNAL: &str =
@@ -62,22 +64,28 @@ pub mod keys {
     pub const HOME: &str = "to the top";
     pub const END: &str = "to the bottom";
     pub const PICK: &str = "pick";
-    pub const EDIT_FIELD: &str = "edit";
+    pub const EDIT_FIELD: &str = "into the form";
     pub const TYPE_VALUE: &str = "type a new value into the selected field";
     pub const SAVE_SET: &str = "save set";
+    pub const SAVE_READINGS: &str = "save readings";
+    pub const OPEN_RECORD: &str = "open the record in full";
+    pub const CLOSE_RECORD: &str = "close the record";
+    pub const TO_SPEED: &str = "to the speed column of this row";
+    pub const TO_DIAL: &str = "to the dial column of this row";
     pub const ADD_ROW: &str = "add a reading row";
     pub const REMOVE_ROW: &str = "remove the selected reading row";
     pub const NEXT_MODEL: &str = "model";
     pub const PREV_MODEL: &str = "previous model";
     pub const AUTO_MODEL: &str = "let the tool choose the model";
     pub const SET_RATE: &str = "new shear rate";
+    pub const FIELD_RELATIONS: &str = "field relations / model";
     pub const TYPE_RATE: &str = "type a shear rate for the apparent viscosity";
     pub const ACCEPT: &str = "accept";
-    pub const ACCEPT_NEXT: &str = "accept, next field";
+    pub const ACCEPT_NEXT: &str = "next field";
     pub const ACCEPT_PREV: &str = "accept, previous field";
     pub const ACCEPT_UP: &str = "accept, field above";
     pub const ACCEPT_DOWN: &str = "accept, field below";
-    pub const CANCEL_EDIT: &str = "undo changes";
+    pub const CANCEL_EDIT: &str = "leave, put back";
     pub const DELETE_BACK: &str = "delete before the cursor";
     pub const DELETE_FORWARD: &str = "delete at the cursor";
     pub const CURSOR_LEFT: &str = "cursor left";
@@ -159,9 +167,23 @@ pub mod readings {
     pub const NOTES: &str = "Notes";
     pub const SPEED: &str = "Speed";
     pub const DIAL: &str = "Dial";
-    pub const STORES: &str = "stored as";
+    pub const STORES: &str = "shear rate, stress";
     pub const NO_VISCOMETER: &str = "no viscometer in the site config";
-    pub const OK_HINT: &str = "Fields are checked as you type; s saves the set to the journal.";
+    pub const OK_HINT: &str =
+        "Fields are checked as you type. Ctrl-S or Enter on Save set journals the set.";
+    pub const PARKED_HINT: &str =
+        "Enter, Down or a digit goes into the form; Tab goes to the next view.";
+    pub const SAVE_LINE: &str = "Save set";
+    pub const SAVE_LINE_HINT: &str = "[ Save set ]  Enter journals the set";
+    pub const ON_SAVE_LINE: &str = "On Save set: Enter journals the set; Up goes back to Notes.";
+    pub const ON_VISCOMETER: &str =
+        "Left / Right choose the viscometer; typed dials are kept when it changes.";
+    pub const LEFT_FORM: &str =
+        "Left the form (the field was put back as it was); Enter or a digit goes back in.";
+    pub const MOVED_TO: &str = "Now at";
+    pub const REFUSED_AT: &str = "the cursor is on";
+    pub const FEW_READINGS: &str = "readings: fewer than the simplest model needs";
+    pub const CONFIRM_FEW: &str = "Press Ctrl-S again to save it anyway, or type more dials.";
     pub const NEED_PRODUCT: &str =
         "No product picked: pick one on the Site view (Shift-Tab) first.";
     pub const NEED_VISCOMETER: &str =
@@ -169,14 +191,51 @@ pub mod readings {
     pub const NEED_READING: &str = "No dial reading entered: type at least one dial value.";
     pub const DIAL_NEEDS_SPEED: &str = "a dial reading needs a speed";
     pub const NEGATIVE_DIAL: &str = "a dial reading cannot be negative; type 0 or more";
+    pub const PEGGED: &str =
+        "at full scale (pegged): left out of the fit; read it again at a lower speed";
+    pub const LOW_SCALE: &str = "below 10 % of scale: low accuracy";
+    pub const SPEED_RANGE: &str = "speed outside this instrument's";
+    pub const ABOVE_FASTER: &str = "above the reading at a higher speed, row";
     pub const ROW: &str = "row";
+    pub const NEGATIVE_SHORT: &str = "negative";
+    pub const PEGGED_SHORT: &str = "pegged: left out";
+    pub const LOW_SCALE_SHORT: &str = "low on scale";
+    pub const RANGE_SHORT: &str = "outside";
+    pub const ABOVE_SHORT: &str = "above row";
     pub const SAVED: &str = "Set sent to the journal; its flow curve is on the Flow curve view.";
+    pub const SWITCHED: &str = "Viscometer now";
+    pub const WAS: &str = "was";
+    pub const ONLY_VISCOMETER: &str = "The site config lists one viscometer only.";
+    pub const DIALS_TYPED_ON: &str = "dial(s) typed on";
+    pub const PRESS_AGAIN_TO_SWITCH: &str = "Press the same arrow again to switch to";
+    pub const KEEPING_DIALS: &str = "(typed dials and speeds are kept).";
+    pub const DIALS_KEPT: &str = "typed dials kept";
+    pub const SPEEDS_SET: &str = "speeds set to this instrument's usual ones";
+    pub const SPEEDS_KEPT: &str = "speeds kept as typed";
     pub const SET_SUMMARY: &str = "Viscometer set";
     pub const READINGS_WORD: &str = "readings";
     pub const NO_TEMPERATURE: &str = "no temperature";
     pub const MAX_ROWS: &str = "No more rows: ten readings is the most a set holds.";
     pub const MIN_ROWS: &str = "A set keeps at least one row.";
     pub const FORM_NAME: &str = "The readings form";
+}
+
+/// Spot readings view.
+pub mod spot {
+    pub const TITLE: &str = "Spot readings at";
+    pub const PICK_EQUIPMENT: &str =
+        "Pick a pump, a line or a tank on the Site view first: its readings are offered here.";
+    pub const PARKED_HINT: &str = "Enter, Down or a digit goes into the form; Ctrl-S journals the readings; Tab goes to the next view.";
+    pub const LEFT_FORM: &str =
+        "Left the form (the field was put back as it was); Enter or a digit goes back in.";
+    pub const NEED_EQUIPMENT: &str = "No equipment picked: pick one on the Site view first.";
+    pub const NOTHING_TYPED: &str = "Nothing typed: type at least one reading before Ctrl-S.";
+    pub const CURSOR_ON: &str = "the cursor is on";
+    pub const SENT: &str = "reading(s) sent to the journal for";
+    pub const OVER_JOURNALLED: &str =
+        "above a site limit, journalled as warnings with their caution.";
+    pub const UNLESS_UNIT: &str = "unless a unit is typed";
+    pub const FORM_NAME: &str = "The spot readings form";
 }
 
 /// Flow curve view.
@@ -206,6 +265,16 @@ pub mod curve {
     pub const SENDING: &str = "sending";
     pub const RATE_INVALID: &str = "shear rate";
     pub const PM_IS_95: &str = "(± is the 95 % interval)";
+    pub const LIMITS_TITLE: &str = "Spec limits,";
+    pub const RELATIONS_TITLE: &str = " Field relations (API RP 13D) ";
+    pub const RELATIONS_FROM: &str = "From the 600 and 300 rpm dials, as fit reports them.";
+    pub const NO_RELATIONS: &str = "No field relations: they need the standard six-speed instrument with 600 and 300 rpm read (not pegged).";
+    pub const LIMITS_AT: &str = "at";
+    pub const LIMITS_AS_MEASURED: &str = "as measured";
+    pub const NO_LIMITS: &str = "No spec limits for this product in the site config.";
+    pub const OUT: &str = "OUT";
+    pub const IN: &str = "in";
+    pub const IS: &str = "is";
     pub const AT: &str = "at";
 }
 
@@ -295,6 +364,9 @@ pub mod journal {
     pub const TITLE: &str = " Session journal ";
     pub const FILE: &str = "file";
     pub const EMPTY: &str = "Nothing recorded yet.";
+    pub const RECORD_TITLE: &str = " Record (Up/Down scroll, Esc or Enter closes) ";
+    pub const NOT_NUMBERED: &str = "Not yet numbered by the journal: it is still being written.";
+    pub const OPENED: &str = "The selected record in full; Up/Down scroll it, Esc closes it.";
     pub const SAVED: &str = "saved";
     pub const SENDING: &str = "sending";
     pub const UNSAVED: &str = "UNSAVED";

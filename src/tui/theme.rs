@@ -40,6 +40,24 @@ pub enum Glyphs {
     Ascii,
 }
 
+impl Glyphs {
+    /// ASCII when asked (`--ascii`) or when the terminal is `TERM=dumb`, which cannot be
+    /// trusted with box drawing or symbols either.
+    pub fn from_env(ascii_asked: bool, term: Option<&str>) -> Glyphs {
+        if ascii_asked || term == Some("dumb") {
+            Glyphs::Ascii
+        } else {
+            Glyphs::Unicode
+        }
+    }
+
+    /// Read the process environment once, at start-up.
+    pub fn detect(ascii_asked: bool) -> Glyphs {
+        let term = std::env::var("TERM").ok();
+        Glyphs::from_env(ascii_asked, term.as_deref())
+    }
+}
+
 /// Border, chart and list glyphs for one glyph set.
 #[derive(Debug, Clone, Copy)]
 pub struct Marks {
@@ -195,6 +213,20 @@ mod tests {
         }
         assert!(t.selected.add_modifier.contains(Modifier::REVERSED));
         assert!(t.tab_active.add_modifier.contains(Modifier::REVERSED));
+    }
+
+    #[test]
+    fn a_dumb_terminal_gets_ascii_glyphs() {
+        assert_eq!(Glyphs::from_env(false, Some("dumb")), Glyphs::Ascii);
+        assert_eq!(
+            Glyphs::from_env(true, Some("xterm-256color")),
+            Glyphs::Ascii
+        );
+        assert_eq!(
+            Glyphs::from_env(false, Some("xterm-256color")),
+            Glyphs::Unicode
+        );
+        assert_eq!(Glyphs::from_env(false, None), Glyphs::Unicode);
     }
 
     #[test]

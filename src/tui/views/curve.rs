@@ -13,10 +13,11 @@ use crate::journal::Payload;
 use crate::present::Style;
 use crate::rheology::ModelKind;
 use crate::session::state::{Entry, ViscometerSet};
+use crate::session::trend::{LimitCheck, checks_at_reference, spec_rate};
 use crate::session::{FlowCurve, ModelPick};
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b, h};
-use crate::tui::strings::{caution, keys, views as names};
+use crate::tui::strings::{caution, curve as s, keys, views as names};
 use crate::tui::session_log::summarize;
 use crate::tui::widgets::editing::{self, EditStep};
 use crate::tui::widgets::field::{Field, FieldKind};
@@ -36,6 +37,12 @@ const KEYS: &[Binding] = &[
     h(Scope::View, &[Key::Char('A')], Action::AutoModel, keys::AUTO_MODEL),
     b(Scope::View, &[Key::Char('r'), Key::Enter], Action::Activate, keys::SET_RATE),
     h(Scope::View, &[Key::Digit], Action::Type('0'), keys::TYPE_RATE),
+    b(
+        Scope::View,
+        &[Key::Char('f')],
+        Action::ToggleRelations,
+        keys::FIELD_RELATIONS,
+    ),
 ];
 
 /// The model choices in the order `m` steps through them.
@@ -65,12 +72,36 @@ pub struct Shown {
     pub y: LogRange,
     /// The stress axis's unit (the site's); marks and samples are in it.
     pub y_unit: String,
+    /// The product's spec limits checked on the shown curve, as `report` checks them.
+    pub limits: Option<Limits>,
+}
+
+/// A set's product limits checked, for the limits panel.
+pub struct Limits {
+    pub product: String,
+    pub checks: Vec<LimitCheck>,
+    /// The reference temperature the curve was shifted to, K; `None`: as measured.
+    pub shifted_to_k: Option<f64>,
+}
+
+/// The set's product limits on its shown curve (`None` without a product in the config).
+fn limits_of(set: &ViscometerSet, curve: &FlowCurve, ctx: &Ctx) -> Option<Limits> {
+    let product = ctx.site.product(&set.product)?;
+    let (checks, shifted_to_k) =
+        checks_at_reference(product, &curve.fit.model, set.temperature_k);
+    Some(Limits {
+        product: product.name.clone(),
+        checks,
+        shifted_to_k,
+    })
 }
 
 pub struct CurveView {
     chart: Option<Shown>,
     rate: Field,
     editing: bool,
+    /// The model panel shows the API RP 13D field relations instead of the model.
+    relations: bool,
 }
 
 impl CurveView {
@@ -79,6 +110,7 @@ impl CurveView {
             chart: None,
             rate: Field::with_text(FieldKind::Positive(Dimension::ShearRate), DEFAULT_RATE),
             editing: false,
+            relations: false,
         }
     }
 
@@ -129,6 +161,22 @@ impl CurveView {
     }
 }
 
+impl CurveView {
+    fn toggle_relations(&mut self, ctx: &Ctx) -> Vec<Effect> {
+        let has = ctx
+            .session
+            .latest_set()
+            .and_then(|e| e.item.shown().as_ref().ok())
+            .is_some_and(|c| c.api_rp13d.is_some());
+        if !has {
+            self.relations = false;
+            return vec![Effect::Status(s::NO_RELATIONS.to_string())];
+        }
+        self.relations = !self.relations;
+        Vec::new()
+    }
+}
+
 /// A `choice` record: what is to be shown for the set.
 fn choice(entry: &Entry<ViscometerSet>, pick: ModelPick, rate: Option<f64>) -> Effect {
     let payload = Payload::Choice {
@@ -140,6 +188,14 @@ fn choice(entry: &Entry<ViscometerSet>, pick: ModelPick, rate: Option<f64>) -> E
         summary: summarize(&payload, entry.equipment.as_deref()),
         equipment: entry.equipment.clone(),
         payload,
+    })
+}
+
+/// The shear rate of the product's apparent-viscosity limit, when it has one.
+fn limit_rate(product: &crate::site::Product) -> Option<f64> {
+    product.limits.iter().find_map(|l| match l.property {
+        crate::site::LimitProperty::ApparentViscosity { .. } => Some(spec_rate(product)),
+        _ => None,
     })
 }
 
@@ -171,6 +227,7 @@ fn chart_of(seq: u64, pick: ModelPick, curve: &FlowCurve, style: Style) -> Shown
         x,
         y,
         y_unit: style.text(y_unit),
+        limits: None,
     }
 }
 
@@ -216,6 +273,7 @@ impl View for CurveView {
                 Some(e) => vec![choice(e, ModelPick::Auto, self.rate_now(&e.item))],
                 None => Vec::new(),
             },
+            Action::ToggleRelations => self.toggle_relations(ctx),
             // A new rate is typed from scratch (Esc brings the old one back).
             Action::Activate => {
                 self.rate.begin_edit();
@@ -245,13 +303,19 @@ impl View for CurveView {
         {
             return;
         }
-        self.chart = entry
+        let new_set = self.chart.as_ref().is_none_or(|c| c.seq != entry.seq);
+        self.chart = entry.item.shown().as_ref().ok().map(|curve| Shown {
+            limits: limits_of(&entry.item, curve, ctx),
+            ..chart_of(entry.seq, pick, curve, ctx.style())
+        });
+        // The rate chosen for the set; for a new set without one, the rate of the product's
+        // apparent-viscosity limit (as `report` and `trend` use), else what the field held.
+        let spec = ctx.site.product(&entry.item.product).and_then(limit_rate);
+        let rate = entry
             .item
-            .shown()
-            .as_ref()
-            .ok()
-            .map(|curve| chart_of(entry.seq, pick, curve, ctx.style()));
-        if let Some(rate) = entry.item.shear_rate_per_s {
+            .shear_rate_per_s
+            .or(spec.filter(|_| new_set));
+        if let Some(rate) = rate {
             self.rate = Field::with_text(
                 FieldKind::Positive(Dimension::ShearRate),
                 &crate::units::significant(rate),
@@ -267,6 +331,7 @@ impl View for CurveView {
             rate: &self.rate,
             apparent_at: entry.and_then(|e| self.rate_now(&e.item)),
             editing: self.editing,
+            relations: self.relations,
         };
         view.draw(frame, area, ctx);
     }

@@ -2,10 +2,12 @@
 //! (constants ± 95 % CI, R², RMSE, the reason, apparent viscosity) on the right, and a
 //! table of the points when the screen is tall enough.
 
-use super::curve::Shown;
+use super::curve::{Limits, Shown};
+use crate::present::limits;
 use crate::present::{self, Style};
 use crate::rheology::Fit;
 use crate::session::state::{Entry, ViscometerSet};
+use crate::session::trend::LimitStatus;
 use crate::session::{FlowCurve, ModelPick};
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
@@ -34,6 +36,8 @@ pub struct CurveScreen<'a> {
     /// The shear rate the apparent viscosity is shown at.
     pub apparent_at: Option<f64>,
     pub editing: bool,
+    /// Show the field relations in the model panel.
+    pub relations: bool,
 }
 
 impl CurveScreen<'_> {
@@ -59,13 +63,26 @@ impl CurveScreen<'_> {
         } else {
             0
         };
-        let [chart, table, warnings] = Layout::vertical([
+        let limit_lines = shown
+            .limits
+            .as_ref()
+            .map(|l| limit_lines(l, ctx))
+            .unwrap_or_default();
+        let limits_h = lines_height(&limit_lines, left);
+        let [chart, limits, table, warnings] = Layout::vertical([
             Constraint::Min(0),
+            Constraint::Length(limits_h),
             Constraint::Length(table_h),
             Constraint::Length(warn_h),
         ])
         .areas(left);
         draw_chart(frame, chart, shown, t);
+        if let Some(l) = shown.limits.as_ref().filter(|_| limits_h > 0) {
+            let para = Paragraph::new(limit_lines)
+                .wrap(Wrap { trim: true })
+                .block(t.panel(limits_title(l, ctx)));
+            frame.render_widget(para, limits);
+        }
         if table_h > 0 {
             draw_points(frame, table, curve, ctx.style(), t);
         }
@@ -86,6 +103,29 @@ impl CurveScreen<'_> {
 
     fn draw_panel(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
         let t = &ctx.theme;
+        let relations = self
+            .entry
+            .and_then(|e| e.item.shown().as_ref().ok())
+            .and_then(|c| c.api_rp13d.as_ref())
+            .filter(|_| self.relations);
+        if let Some(a) = relations {
+            let style = ctx.style();
+            let mut lines = vec![self.set_line(ctx)];
+            for (label, value) in present::relations::field_relations(a, style) {
+                lines.push(Line::styled(label, t.dim));
+                lines.push(Line::raw(format!("   {value}")));
+            }
+            lines.push(Line::styled(s::RELATIONS_FROM, t.dim));
+            lines.push(Line::styled(
+                style.text(crate::session::api_rp13d::CONVERSION_NOTE),
+                t.dim,
+            ));
+            let p = Paragraph::new(lines)
+                .wrap(Wrap { trim: false })
+                .block(t.panel(s::RELATIONS_TITLE));
+            frame.render_widget(p, area);
+            return;
+        }
         let outer = t.panel(s::MODEL_TITLE);
         let inner = outer.inner(area);
         frame.render_widget(outer, area);
@@ -216,6 +256,70 @@ fn draw_message(frame: &mut Frame, area: Rect, text: &str, t: &Theme) {
         .wrap(Wrap { trim: true })
         .block(t.panel(s::CHART_TITLE));
     frame.render_widget(para, area);
+}
+
+/// The limits panel's title: the product and the temperature the limits are checked at.
+fn limits_title(l: &Limits, ctx: &Ctx) -> String {
+    let style = ctx.style();
+    let basis = match l.shifted_to_k {
+        Some(k) => format!(
+            "{} {}",
+            s::LIMITS_AT,
+            present::quantity(k, Dimension::Temperature, style)
+        ),
+        None => s::LIMITS_AS_MEASURED.to_string(),
+    };
+    style.text(&format!(
+        " {} {}, {basis} ",
+        s::LIMITS_TITLE,
+        sanitize(&l.product, false)
+    ))
+}
+
+/// One line per spec limit: OUT (with which way), in, or not checked, in words, with the
+/// value the curve gives; the same words as `report`.
+fn limit_lines(l: &Limits, ctx: &Ctx) -> Vec<Line<'static>> {
+    let t = &ctx.theme;
+    let style = ctx.style();
+    if l.checks.is_empty() {
+        return vec![Line::styled(s::NO_LIMITS, t.dim)];
+    }
+    l.checks
+        .iter()
+        .map(|c| {
+            let value = c.value.map_or(String::new(), |v| {
+                format!(
+                    " ({} {})",
+                    s::IS,
+                    limits::value_text(c.limit.property, v, style)
+                )
+            });
+            let (mark, words, mark_style) = match c.status {
+                LimitStatus::Above | LimitStatus::Below => {
+                    (s::OUT, limits::check_text(c, style), t.error)
+                }
+                LimitStatus::Within => (s::IN, limits::describe_limit(&c.limit, style), t.ok),
+                LimitStatus::NotChecked => ("--", limits::check_text(c, style), t.dim),
+            };
+            Line::from(vec![
+                Span::styled(format!("{mark:<4}"), mark_style),
+                Span::raw(style.text(&format!("{words}{value}"))),
+            ])
+        })
+        .collect()
+}
+
+/// Rows a bordered panel of these lines needs when wrapped (at most half the area).
+fn lines_height(lines: &[Line], area: Rect) -> u16 {
+    if lines.is_empty() {
+        return 0;
+    }
+    let width = area.width.saturating_sub(2);
+    let rows: u16 = lines
+        .iter()
+        .map(|l| crate::tui::layout::wrapped_lines(&l.to_string(), width))
+        .sum();
+    (rows + 2).min(area.height / 2)
 }
 
 fn warnings_height(warnings: &[String], area: Rect) -> u16 {

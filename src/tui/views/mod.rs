@@ -96,6 +96,7 @@ macro_rules! views {
 views! {
     site::SiteView,
     readings::ReadingsView,
+    spot::SpotView,
     curve::CurveView,
     line::LineView,
     restart::RestartView,

@@ -1,10 +1,11 @@
 //! Drawing the viscometer-set form: picks, viscometer, temperature, the reading table with
 //! what each row will store, notes, and the message for the selected field.
 
-use super::readings_form::{Focus, Form};
+use super::readings_form::{Focus, Form, RowPreview};
+use crate::present;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
-use crate::tui::layout::row;
+use crate::tui::layout::{clip_words, row};
 use crate::tui::strings::readings as s;
 use crate::tui::theme::Theme;
 use crate::tui::widgets::field::{Checked, Field};
@@ -24,7 +25,7 @@ const ROW_NUM_W: u16 = 5;
 pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx) {
     let t = &ctx.theme;
     draw_picks(frame, row(area, 0), ctx);
-    draw_viscometer(frame, row(area, 1), form, ctx);
+    draw_viscometer(frame, row(area, 1), form, editing, ctx);
     label(frame, row(area, 2), s::TEMPERATURE, t);
     draw_field(
         frame,
@@ -48,7 +49,7 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
             Dimension::Temperature.default_unit(),
             s::UNLESS_UNIT
         );
-        frame.render_widget(Paragraph::new(text).style(t.dim), hint);
+        frame.render_widget(Paragraph::new(ctx.style().text(&text)).style(t.dim), hint);
     }
     let speed = format!("{} ({})", s::SPEED, Dimension::Speed.default_unit());
     let header = format!(
@@ -60,6 +61,7 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
         w2 = usize::from(DIAL_W)
     );
     frame.render_widget(Paragraph::new(header).style(t.dim), row(area, 3));
+    let previews = form.preview(ctx.site.viscometers.get(form.viscometer));
     for (i, r) in form.rows.iter().enumerate() {
         let line = row(area, 4 + i as u16);
         let number = Span::styled(format!("{:>3}", i + 1), t.dim);
@@ -89,7 +91,9 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
             ..line
         }
         .intersection(line);
-        frame.render_widget(Paragraph::new(row_stored(&r.speed, &r.dial, t)), stored);
+        let preview = previews.get(i).cloned().unwrap_or_default();
+        let line = row_stored(&r.speed, &r.dial, &preview, stored.width, ctx);
+        frame.render_widget(Paragraph::new(line), stored);
     }
     let notes_row = 4 + form.rows.len() as u16;
     label(frame, row(area, notes_row), s::NOTES, t);
@@ -104,13 +108,27 @@ pub fn draw(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx
         editing,
         t,
     );
+    let save_style = if form.focus == Focus::Save && editing {
+        t.selected
+    } else {
+        t.dim
+    };
+    let save = Paragraph::new(Span::styled(s::SAVE_LINE_HINT, save_style));
+    frame.render_widget(
+        save,
+        Rect {
+            x: area.x + LABEL_W,
+            ..row(area, notes_row + 1)
+        }
+        .intersection(area),
+    );
     let message = Rect {
         y: area.y + notes_row + 2,
-        height: 2,
+        height: area.height.saturating_sub(notes_row + 2),
         ..area
     }
     .intersection(area);
-    frame.render_widget(message_for(form, t), message);
+    frame.render_widget(message_for(form, editing, &previews, ctx), message);
 }
 
 /// Styles only the label's own cells, so fields drawn beside it start from plain cells.
@@ -136,9 +154,9 @@ fn draw_picks(frame: &mut Frame, area: Rect, ctx: &Ctx) {
     frame.render_widget(Paragraph::new(line), area);
 }
 
-fn draw_viscometer(frame: &mut Frame, area: Rect, form: &Form, ctx: &Ctx) {
+fn draw_viscometer(frame: &mut Frame, area: Rect, form: &Form, editing: bool, ctx: &Ctx) {
     let t = &ctx.theme;
-    let focused = form.focus == Focus::Viscometer;
+    let focused = form.focus == Focus::Viscometer && editing;
     let (name, desc) = match ctx.site.viscometers.get(form.viscometer) {
         Some(v) => (
             format!("< {} >", sanitize(&v.id, false)),
@@ -181,6 +199,8 @@ fn draw_field(
     .intersection(line);
     let selected = form.focus == focus;
     let style = match (selected, editing) {
+        // Its text is selected: the next key replaces it.
+        (true, true) if form.replace_next => t.selected,
         (true, true) => t.field_editing,
         (true, false) => t.selected,
         _ if field.error().is_some() => t.error,
@@ -213,30 +233,79 @@ fn draw_si(frame: &mut Frame, line: Rect, x: u16, field: &Field, t: &Theme) {
     frame.render_widget(Paragraph::new(text).style(t.ok), area);
 }
 
-/// What a row will store ("62.8 rad/s"; bright once the row has a dial value), or
+/// What a row will give (its shear rate and shear stress, bright once it has a dial), then
+/// its first check in short words (the message line below the form has the full words), or
 /// which part is wrong.
-fn row_stored<'a>(speed: &Field, dial: &Field, t: &Theme) -> Line<'a> {
+fn row_stored<'a>(
+    speed: &Field,
+    dial: &Field,
+    preview: &RowPreview,
+    width: u16,
+    ctx: &Ctx,
+) -> Line<'a> {
+    let t = &ctx.theme;
+    let style = ctx.style();
     let problem = speed
         .error()
         .map(|e| (s::SPEED, e))
         .or(dial.error().map(|e| (s::DIAL, e)));
     if let Some((which, err)) = problem {
-        return Line::styled(format!("{which}: {err}"), t.error);
+        // The full words are on the message line when the row is selected.
+        let text = style.text(&format!("{which}: {err}"));
+        return Line::styled(clip_words(&text, usize::from(width), t.marks.cut), t.error);
     }
-    match (speed.value(), dial.value()) {
-        // A dial value is a plain number, stored as typed: only the speed needs an echo.
-        (Some(_), Some(_)) => Line::styled(speed.si_text(), t.ok),
-        (Some(_), None) => Line::styled(speed.si_text(), t.dim),
-        (None, Some(_)) => Line::styled(format!("! {}", s::DIAL_NEEDS_SPEED), t.error),
-        (None, None) => Line::default(),
+    let rate = preview
+        .rate_per_s
+        .map(|r| present::quantity(r, Dimension::ShearRate, style));
+    let stress = preview
+        .stress_pa
+        .map(|p| present::quantity(p, Dimension::Stress, style));
+    let mut spans = match (rate, stress) {
+        // Fixed columns, so a typed digit redraws its own value only.
+        (Some(r), Some(p)) => vec![Span::styled(format!("{r:<10}{p:<10}"), t.ok)],
+        (Some(r), None) => vec![Span::styled(format!("{r:<20}"), t.dim)],
+        (None, Some(_)) => vec![Span::styled(format!("! {}", s::DIAL_NEEDS_SPEED), t.error)],
+        (None, None) => Vec::new(),
+    };
+    if let Some(note) = preview.notes.first() {
+        let mark = if note.is_strong() { t.error } else { t.warn };
+        spans.push(Span::styled(
+            format!("! {}", style.text(&note.short())),
+            mark,
+        ));
     }
+    Line::from(spans)
 }
 
-/// The selected field's problem in words, or a hint.
-fn message_for(form: &Form, t: &Theme) -> Paragraph<'static> {
-    let (text, style): (String, Style) = match form.field(form.focus).and_then(Field::error) {
-        Some(err) => (format!("! {err}"), t.error),
-        None => (s::OK_HINT.to_string(), t.dim),
+/// The selected field's problem in words, the checks on the selected row in full, or a hint
+/// for where the cursor is; wrapped, so a long message is never cut.
+fn message_for(
+    form: &Form,
+    editing: bool,
+    previews: &[RowPreview],
+    ctx: &Ctx,
+) -> Paragraph<'static> {
+    let t = &ctx.theme;
+    let error = form.field(form.focus).and_then(Field::error);
+    let row_notes = match form.focus {
+        Focus::Speed(i) | Focus::Dial(i) => previews.get(i).map(|p| p.notes.as_slice()),
+        _ => None,
+    }
+    .unwrap_or_default();
+    let (text, style): (String, Style) = match (editing, error, form.focus) {
+        (false, _, _) => (s::PARKED_HINT.to_string(), t.dim),
+        (true, Some(err), _) => (format!("! {err}"), t.error),
+        (true, None, _) if !row_notes.is_empty() => {
+            let words: Vec<String> = row_notes.iter().map(|n| n.words()).collect();
+            let strong = row_notes.iter().any(|n| n.is_strong());
+            let mark = if strong { t.error } else { t.warn };
+            (format!("! {}.", words.join("; ")), mark)
+        }
+        (true, None, Focus::Viscometer) => (s::ON_VISCOMETER.to_string(), t.dim),
+        (true, None, Focus::Save) => (s::ON_SAVE_LINE.to_string(), t.dim),
+        (true, None, _) => (s::OK_HINT.to_string(), t.dim),
     };
-    Paragraph::new(text).style(style).wrap(Wrap { trim: true })
+    Paragraph::new(ctx.style().text(&text))
+        .style(style)
+        .wrap(Wrap { trim: true })
 }

@@ -3,6 +3,7 @@
 
 use crate::instrument::{Geometry, STANDARD_SPEEDS_RPM};
 use crate::journal::DialRow;
+use crate::site::Viscometer;
 use crate::tui::strings::readings as s;
 use crate::tui::widgets::field::{Checked, Field, FieldKind};
 use crate::units::Dimension;
@@ -37,6 +38,22 @@ pub enum Focus {
     Speed(usize),
     Dial(usize),
     Notes,
+    /// The "Save set" line: Enter on it journals the set.
+    Save,
+}
+
+impl Focus {
+    /// Where the focus is, in words for the status line.
+    pub fn describe(self) -> String {
+        match self {
+            Focus::Viscometer => s::VISCOMETER.to_string(),
+            Focus::Temperature => s::TEMPERATURE.to_string(),
+            Focus::Speed(i) => format!("{} {} {}", s::ROW, i + 1, s::SPEED.to_lowercase()),
+            Focus::Dial(i) => format!("{} {} {}", s::ROW, i + 1, s::DIAL.to_lowercase()),
+            Focus::Notes => s::NOTES.to_string(),
+            Focus::Save => s::SAVE_LINE.to_string(),
+        }
+    }
 }
 
 /// A set that passed every check, ready for the journal.
@@ -61,6 +78,11 @@ pub struct Form {
     pub rows: Vec<Row>,
     pub notes: Field,
     pub focus: Focus,
+    /// The instrument reads at fixed speeds (the standard six-speed): Tab goes dial to dial.
+    pub fixed_speeds: bool,
+    /// The focused field was entered by Tab or an arrow: its text is selected and the next
+    /// printable key replaces it.
+    pub replace_next: bool,
 }
 
 /// The speeds a geometry is usually read at, as typed text.
@@ -84,6 +106,8 @@ impl Form {
                 .collect(),
             notes: Field::new(FieldKind::Text(NOTES_MAX_CHARS)),
             focus: Focus::Dial(0),
+            fixed_speeds: matches!(geometry, Some(Geometry::StandardSixSpeed)),
+            replace_next: false,
         }
     }
 
@@ -92,25 +116,40 @@ impl Form {
         *self = Form::new(self.viscometer, geometry);
     }
 
-    /// Switch viscometer; speeds still at the old usual values take the new ones.
-    pub fn set_viscometer(&mut self, index: usize, old: Option<&Geometry>, new: Option<&Geometry>) {
+    /// Switch viscometer. Typed dials are always kept, and so are the speeds once a dial is
+    /// typed (they were read together); otherwise speeds still at the old instrument's usual
+    /// values take the new one's (cleared where it has none). True when the speeds changed,
+    /// for the status line.
+    pub fn set_viscometer(
+        &mut self,
+        index: usize,
+        old: Option<&Geometry>,
+        new: Option<&Geometry>,
+    ) -> bool {
         self.viscometer = index;
+        self.fixed_speeds = matches!(new, Some(Geometry::StandardSixSpeed));
         let typed: Vec<&str> = self.rows.iter().map(|r| r.speed.text()).collect();
-        if typed
-            == usual_speeds(old)
-                .iter()
-                .map(String::as_str)
-                .collect::<Vec<_>>()
-        {
-            for (row, speed) in self.rows.iter_mut().zip(usual_speeds(new)) {
-                row.speed.set_text(&speed);
-            }
+        let usual_old: Vec<String> = usual_speeds(old);
+        let same =
+            typed.len() == usual_old.len() && typed.iter().zip(&usual_old).all(|(a, b)| a == b);
+        let new_speeds = usual_speeds(new);
+        if !same || new_speeds == usual_old || self.dials_typed() > 0 {
+            return false;
         }
+        for (row, speed) in self.rows.iter_mut().zip(new_speeds) {
+            row.speed.set_text(&speed);
+        }
+        true
+    }
+
+    /// How many rows have a dial typed.
+    pub fn dials_typed(&self) -> usize {
+        self.rows.iter().filter(|r| !r.dial.is_empty()).count()
     }
 
     pub fn field_mut(&mut self, focus: Focus) -> Option<&mut Field> {
         match focus {
-            Focus::Viscometer => None,
+            Focus::Viscometer | Focus::Save => None,
             Focus::Temperature => Some(&mut self.temperature),
             Focus::Speed(i) => self.rows.get_mut(i).map(|r| &mut r.speed),
             Focus::Dial(i) => self.rows.get_mut(i).map(|r| &mut r.dial),
@@ -120,7 +159,7 @@ impl Form {
 
     pub fn field(&self, focus: Focus) -> Option<&Field> {
         match focus {
-            Focus::Viscometer => None,
+            Focus::Viscometer | Focus::Save => None,
             Focus::Temperature => Some(&self.temperature),
             Focus::Speed(i) => self.rows.get(i).map(|r| &r.speed),
             Focus::Dial(i) => self.rows.get(i).map(|r| &r.dial),
@@ -128,26 +167,64 @@ impl Form {
         }
     }
 
-    /// Every focus stop in reading order (Tab order).
+    /// Every focus stop in Tab order. On a fixed-speed instrument the speeds are left out,
+    /// so Tab goes from dial to dial and never into a speed.
     fn order(&self) -> Vec<Focus> {
         let mut v = vec![Focus::Viscometer, Focus::Temperature];
         for i in 0..self.rows.len() {
-            v.extend([Focus::Speed(i), Focus::Dial(i)]);
+            if !self.fixed_speeds {
+                v.push(Focus::Speed(i));
+            }
+            v.push(Focus::Dial(i));
         }
-        v.push(Focus::Notes);
+        v.extend([Focus::Notes, Focus::Save]);
         v
     }
 
+    /// The focus's place in Tab order (a speed reached by column keys counts as its dial).
+    fn place(&self, order: &[Focus]) -> usize {
+        let at = match self.focus {
+            Focus::Speed(i) if self.fixed_speeds => Focus::Dial(i),
+            other => other,
+        };
+        order.iter().position(|f| *f == at).unwrap_or(0)
+    }
+
+    /// Tab: from a dial to the next row's dial (to its speed only on an instrument without
+    /// fixed speeds whose next speed is still empty), so Tab never lands in a speed that
+    /// already holds a value.
     pub fn next(&mut self) {
+        let rows = self.rows.len();
+        if let Focus::Dial(i) | Focus::Speed(i) = self.focus {
+            let from_speed = matches!(self.focus, Focus::Speed(_));
+            self.focus = match (from_speed, i + 1 < rows) {
+                (true, _) => Focus::Dial(i),
+                (false, true) if self.fixed_speeds || !self.rows[i + 1].speed.is_empty() => {
+                    Focus::Dial(i + 1)
+                }
+                (false, true) => Focus::Speed(i + 1),
+                (false, false) => Focus::Notes,
+            };
+            return;
+        }
         let order = self.order();
-        let at = order.iter().position(|f| *f == self.focus).unwrap_or(0);
+        let at = self.place(&order);
         self.focus = order[(at + 1).min(order.len() - 1)];
     }
 
     pub fn prev(&mut self) {
         let order = self.order();
-        let at = order.iter().position(|f| *f == self.focus).unwrap_or(0);
+        let at = self.place(&order);
         self.focus = order[at.saturating_sub(1)];
+    }
+
+    /// To the speed (`true`) or dial column of the same row; elsewhere nothing moves.
+    pub fn go_to_column(&mut self, speed: bool) {
+        self.focus = match (self.focus, speed) {
+            (Focus::Dial(i), true) => Focus::Speed(i),
+            (Focus::Speed(i), false) => Focus::Dial(i),
+            (other, _) => other,
+        };
     }
 
     /// Down a line, keeping the column inside the table.
@@ -158,7 +235,8 @@ impl Form {
             Focus::Temperature => Focus::Dial(0),
             Focus::Speed(i) if i < last => Focus::Speed(i + 1),
             Focus::Dial(i) if i < last => Focus::Dial(i + 1),
-            Focus::Speed(_) | Focus::Dial(_) | Focus::Notes => Focus::Notes,
+            Focus::Speed(_) | Focus::Dial(_) => Focus::Notes,
+            Focus::Notes | Focus::Save => Focus::Save,
         };
     }
 
@@ -170,15 +248,7 @@ impl Form {
             Focus::Speed(i) => Focus::Speed(i - 1),
             Focus::Dial(i) => Focus::Dial(i - 1),
             Focus::Notes => Focus::Dial(last),
-        };
-    }
-
-    /// Left/right between the speed and dial columns.
-    pub fn across(&mut self) {
-        self.focus = match self.focus {
-            Focus::Speed(i) => Focus::Dial(i),
-            Focus::Dial(i) => Focus::Speed(i),
-            other => other,
+            Focus::Save => Focus::Notes,
         };
     }
 
@@ -272,4 +342,127 @@ fn check_row(i: usize, row: &Row) -> Result<Option<DialRow>, Refusal> {
         dial_raw: row.dial.text().trim().to_string(),
         dial,
     }))
+}
+
+/// What a typed row will give and what is wrong with it, shown as it is typed.
+#[derive(Debug, Clone, PartialEq, Default)]
+pub struct RowPreview {
+    /// Newtonian bob shear rate (1/s) and shear stress (Pa) the row stands for.
+    pub rate_per_s: Option<f64>,
+    pub stress_pa: Option<f64>,
+    pub notes: Vec<RowNote>,
+}
+
+/// A check on one typed row.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum RowNote {
+    NegativeDial,
+    /// At or above full scale: the spring is at its stop and the reading is not valid.
+    Pegged,
+    /// Below 10 % of full scale (common practice, no source).
+    LowScale,
+    /// Outside the instrument's speeds (the standard six-speed runs 3 to 600 rpm; others
+    /// from the site config when given).
+    SpeedOutOfRange {
+        lo_rpm: f64,
+        hi_rpm: f64,
+    },
+    /// Higher than the reading of a row at a higher speed (1-based row).
+    AboveFasterRow(usize),
+}
+
+impl RowNote {
+    /// A reading the fit cannot use as typed (shown in the error colour).
+    pub fn is_strong(self) -> bool {
+        matches!(
+            self,
+            RowNote::NegativeDial | RowNote::Pegged | RowNote::SpeedOutOfRange { .. }
+        )
+    }
+
+    /// A few words for the table's last column (the full words go on the message line).
+    pub fn short(self) -> String {
+        match self {
+            RowNote::NegativeDial => s::NEGATIVE_SHORT.to_string(),
+            RowNote::Pegged => s::PEGGED_SHORT.to_string(),
+            RowNote::LowScale => s::LOW_SCALE_SHORT.to_string(),
+            RowNote::SpeedOutOfRange { lo_rpm, hi_rpm } => {
+                format!("{} {lo_rpm}-{hi_rpm} rpm", s::RANGE_SHORT)
+            }
+            RowNote::AboveFasterRow(row) => format!("{} {row}", s::ABOVE_SHORT),
+        }
+    }
+
+    /// The check in full words.
+    pub fn words(self) -> String {
+        match self {
+            RowNote::NegativeDial => s::NEGATIVE_DIAL.to_string(),
+            RowNote::Pegged => s::PEGGED.to_string(),
+            RowNote::LowScale => s::LOW_SCALE.to_string(),
+            RowNote::SpeedOutOfRange { lo_rpm, hi_rpm } => {
+                format!("{} {lo_rpm} to {hi_rpm} rpm", s::SPEED_RANGE)
+            }
+            RowNote::AboveFasterRow(row) => format!("{} {row}", s::ABOVE_FASTER),
+        }
+    }
+}
+
+impl Form {
+    /// Each row's shear rate and stress on this instrument, with its checks.
+    pub fn preview(&self, viscometer: Option<&Viscometer>) -> Vec<RowPreview> {
+        let Some(v) = viscometer else {
+            return vec![RowPreview::default(); self.rows.len()];
+        };
+        let g = &v.geometry;
+        let typed: Vec<(Option<f64>, Option<f64>)> = self
+            .rows
+            .iter()
+            .map(|r| (r.speed.value().map(|w| w / RAD_S_PER_RPM), r.dial.value()))
+            .collect();
+        typed
+            .iter()
+            .map(|&(rpm, dial)| RowPreview {
+                rate_per_s: rpm.map(|n| n * g.newtonian_rate_per_rpm()),
+                stress_pa: dial.map(|d| d * g.stress_per_dial_pa()),
+                notes: row_notes(g, v.speed_range_rpm, rpm, dial, &typed),
+            })
+            .collect()
+    }
+}
+
+fn row_notes(
+    g: &Geometry,
+    speed_range_rpm: Option<(f64, f64)>,
+    rpm: Option<f64>,
+    dial: Option<f64>,
+    all: &[(Option<f64>, Option<f64>)],
+) -> Vec<RowNote> {
+    let mut notes = Vec::new();
+    let full = g.full_scale_dial();
+    if let Some(d) = dial {
+        if d < 0.0 {
+            notes.push(RowNote::NegativeDial);
+        } else if d >= full {
+            notes.push(RowNote::Pegged);
+        } else if d < crate::instrument::LOW_SCALE_FRACTION * full {
+            notes.push(RowNote::LowScale);
+        }
+    }
+    if let (Some(n), Some((lo, hi))) = (rpm, speed_range_rpm)
+        && !(lo - 1e-9..=hi + 1e-9).contains(&n)
+    {
+        notes.push(RowNote::SpeedOutOfRange {
+            lo_rpm: lo,
+            hi_rpm: hi,
+        });
+    }
+    if let (Some(n), Some(d)) = (rpm, dial) {
+        let faster_lower = all
+            .iter()
+            .position(|&(r, x)| matches!((r, x), (Some(r), Some(x)) if r > n && x < d));
+        if let Some(i) = faster_lower {
+            notes.push(RowNote::AboveFasterRow(i + 1));
+        }
+    }
+    notes
 }
