@@ -63,11 +63,9 @@ pub enum Scope {
     /// The active view's own bindings (its `keys()` table).
     View,
     /// The active view's own bindings that apply at its top level and also while one of its
-    /// fields is being typed into (its `keys()` table too): Ctrl-S to save a form.
+    /// fields is being typed into (its `keys()` table too): Ctrl-S to save a form. Never a
+    /// printable key (those go to the field), so only Ctrl and function keys.
     ViewTyping,
-    /// The active view's bindings that also act while one of its fields is typed into;
-    /// never a printable key (those go to the field), so only Ctrl and function keys.
-    ViewEditing,
     /// While a field is being typed into (including the note box).
     Editing,
     /// The note box, before the editing keys.
@@ -98,12 +96,7 @@ impl Context {
                 Scope::Global,
                 Scope::Always,
             ],
-            Context::Editing => vec![
-                Scope::ViewTyping,
-                Scope::Editing,
-                Scope::ViewEditing,
-                Scope::Always,
-            ],
+            Context::Editing => vec![Scope::ViewTyping, Scope::Editing, Scope::Always],
             Context::Note => vec![Scope::NoteBox, Scope::Editing, Scope::Always],
             Context::Help => vec![Scope::Help, Scope::Always],
             Context::ConfirmQuit => vec![Scope::ConfirmQuit, Scope::Always],
@@ -266,7 +259,7 @@ pub fn bindings_for(ctx: Context, view_keys: &'static [Binding]) -> Vec<&'static
 
 /// Where a scope's bindings are listed: the view's own table, or the shared one.
 fn table(scope: Scope, view_keys: &'static [Binding]) -> impl Iterator<Item = &'static Binding> {
-    let rows = if matches!(scope, Scope::View | Scope::ViewTyping | Scope::ViewEditing) {
+    let rows = if matches!(scope, Scope::View | Scope::ViewTyping) {
         view_keys
     } else {
         BINDINGS

@@ -37,7 +37,7 @@ const KEYS: &[Binding] = &[
     ),
     h(Scope::View, &[Key::Digit], Action::Type('0'), keys::TYPE_VALUE),
     b(
-        Scope::ViewEditing,
+        Scope::ViewTyping,
         &[Key::Ctrl('s')],
         Action::Save,
         keys::SAVE_READINGS,
