@@ -56,10 +56,14 @@ fn type_text(app: &mut App, text: &str) {
 
 /// Pick TK-1 and its product, type the six dials, save: the records the journal numbers.
 fn save_set(app: &mut App) -> Vec<Record> {
+    save_dials(app, &DIALS)
+}
+
+fn save_dials(app: &mut App, dials: &[&str]) -> Vec<Record> {
     press(app, KeyCode::Enter);
     press(app, KeyCode::Enter);
     press(app, KeyCode::Tab);
-    for d in DIALS {
+    for d in dials {
         type_text(app, d);
         press(app, KeyCode::Enter);
     }
@@ -278,6 +282,69 @@ fn a_model_picked_by_hand_survives_replay_resume_and_the_report() {
     let md = String::from_utf8_lossy(&out.stdout);
     assert!(md.contains("**Newtonian**"), "{md}");
     assert!(md.contains("Newtonian chosen by hand"), "{md}");
+}
+
+// Issue: a pegged dial is left out by default, "with a key to include it", the same rule in
+// the screens, `fit` and the report. The 600 rpm dial at 300 is at full scale on the
+// six-speed geometry (VIS-A). `i` keeps it (a journalled choice); the curve shown must be the
+// one `analyse` gives with OffScale::Include (what `fit --include-off-scale` runs), and a
+// replay of the journal must show the same; `i` again leaves it out.
+#[test]
+fn a_pegged_dial_kept_by_hand_agrees_with_the_command_line_and_survives_replay() {
+    use rheoside::session::SessionState;
+    use rheoside::session::checks::OffScale;
+    let pegged = ["300", "76", "61.5", "44", "16", "14"];
+    let mut app = support::demo_app(ColourMode::Plain, Glyphs::Unicode, "ana", "logs/t.jsonl");
+    let mut records = app.ctx.session.log.clone();
+    records.extend(save_dials(&mut app, &pegged));
+    let left_out = |app: &App| {
+        let set = app.ctx.session.latest_set().expect("a set");
+        set.item.shown().as_ref().expect("a curve").left_out.len()
+    };
+    assert_eq!(left_out(&app), 1, "the pegged dial is left out by default");
+
+    press(&mut app, KeyCode::Char('i'));
+    records.extend(support::journal_answers(&mut app, true));
+    assert!(records.iter().any(|r| matches!(
+        r.payload,
+        Payload::Choice {
+            include_off_scale: true,
+            ..
+        }
+    )));
+    assert_eq!(left_out(&app), 0, "kept after i");
+
+    let readings: Vec<rheoside::instrument::DialReading> = SPEEDS
+        .iter()
+        .zip(pegged)
+        .map(|(&rpm, d)| rheoside::instrument::DialReading::new(rpm, d.parse().expect("a dial")))
+        .collect();
+    let opts = FlowCurveOptions {
+        off_scale: OffScale::Include,
+        ..FlowCurveOptions::default()
+    };
+    let input = FlowCurveInput::Dial {
+        geometry: &rheoside::instrument::Geometry::StandardSixSpeed,
+        readings: &readings,
+    };
+    let cli = analyse(input, &opts).expect("the command line's fit");
+    let shown = |state: &SessionState| {
+        let set = state.latest_set().expect("a set");
+        set.item.shown().as_ref().expect("a curve").fit.model
+    };
+    assert_eq!(shown(&app.ctx.session), cli.fit.model);
+
+    let site = rheoside::site::demo().expect("the demo site");
+    let replayed = SessionState::replay(&site, &records);
+    assert_eq!(
+        shown(&replayed),
+        cli.fit.model,
+        "a replay keeps the dial too"
+    );
+
+    press(&mut app, KeyCode::Char('i'));
+    support::journal_answers(&mut app, true);
+    assert_eq!(left_out(&app), 1, "i again leaves it out");
 }
 
 fn refused(args: &[&str], says: &str) {

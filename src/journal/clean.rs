@@ -68,10 +68,12 @@ pub(crate) fn payload(p: Payload) -> Result<Payload, JournalError> {
             set,
             model,
             shear_rate_per_s,
+            include_off_scale,
         } => Payload::Choice {
             set,
             model: line(&model),
             shear_rate_per_s: shear_rate_per_s.filter(|r| r.is_finite()),
+            include_off_scale,
         },
         Payload::Note { text } => Payload::Note { text: prose(&text) },
         Payload::Finding { severity, text } => Payload::Finding {

@@ -71,6 +71,10 @@ pub enum Payload {
         model: String,
         #[serde(default, skip_serializing_if = "Option::is_none")]
         shear_rate_per_s: Option<f64>,
+        /// Keep readings at or above full scale (pegged) in the fit, as `fit
+        /// --include-off-scale` does; absent in older journals (left out).
+        #[serde(default, skip_serializing_if = "std::ops::Not::not")]
+        include_off_scale: bool,
     },
     Note {
         text: String,

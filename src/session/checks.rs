@@ -58,7 +58,7 @@ impl LeftOut {
         format!(
             "reading {} ({} rpm, dial {}) is at or above full scale ({}): the dial was pegged, \
              so it was left out of the fit; read it again at a lower speed or with a stiffer \
-             spring, or give --include-off-scale to keep it",
+             spring, or keep it (--include-off-scale, or i on the Flow curve view)",
             self.row, self.rpm, self.dial, self.full_scale_dial
         )
     }

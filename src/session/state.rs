@@ -4,6 +4,7 @@
 //! Pure: records in, state out. The TUI applies each record as it is saved; `report`
 //! replays a whole file; both go through [`SessionState::apply`], so they cannot disagree.
 
+use super::checks::OffScale;
 use super::flow_curve::{
     FlowCurve, FlowCurveError, FlowCurveInput, FlowCurveOptions, ModelPick, analyse,
 };
@@ -74,7 +75,10 @@ pub struct ViscometerSet {
     pub pick: ModelPick,
     /// The shear rate the apparent viscosity was read at, when one was chosen.
     pub shear_rate_per_s: Option<f64>,
-    /// The curve of a model picked by hand; `None` while the rule's choice is shown.
+    /// Readings at or above full scale kept in the fit (a `choice` record asked for it).
+    pub include_off_scale: bool,
+    /// The curve as the operator chose it (a model picked by hand, or pegged readings kept);
+    /// `None` while the rule's choice on the usual readings is shown.
     pub by_hand: Option<Result<FlowCurve, SetError>>,
 }
 
@@ -101,6 +105,7 @@ impl PartialEq for ViscometerSet {
         curves
             && hand
             && self.pick == other.pick
+            && self.include_off_scale == other.include_off_scale
             && self.shear_rate_per_s == other.shear_rate_per_s
             && self.viscometer == other.viscometer
             && self.product == other.product
@@ -234,7 +239,15 @@ impl SessionState {
                 set,
                 model,
                 shear_rate_per_s,
-            } => self.choose(site, record.seq, *set, model, *shear_rate_per_s),
+                include_off_scale,
+            } => {
+                let asked = Asked {
+                    model,
+                    rate: *shear_rate_per_s,
+                    include_off_scale: *include_off_scale,
+                };
+                self.choose(site, record.seq, *set, asked)
+            }
             Payload::Note { text } => self.notes.push(entry(record, at, text.clone())),
             Payload::Finding { severity, text } => {
                 let item = FindingItem {
@@ -259,7 +272,8 @@ impl SessionState {
 
     /// A by-hand model or shear rate for a set: refit with that model (the rule's curve is
     /// kept), so a replay shows what was on screen.
-    fn choose(&mut self, site: &Site, seq: u64, set: u64, model: &str, rate: Option<f64>) {
+    fn choose(&mut self, site: &Site, seq: u64, set: u64, asked: Asked<'_>) {
+        let model = asked.model;
         let pick = match model.parse::<ModelPick>() {
             Ok(p) => p,
             Err(e) => {
@@ -275,14 +289,20 @@ impl SessionState {
             return;
         };
         let s = &mut entry.item;
-        if s.pick != pick {
-            s.by_hand = match pick {
-                ModelPick::Auto => None,
-                ModelPick::Fixed(_) => Some(fit_rows_with(site, &s.viscometer, &s.rows, pick)),
+        if s.pick != pick || s.include_off_scale != asked.include_off_scale {
+            let off_scale = if asked.include_off_scale {
+                OffScale::Include
+            } else {
+                OffScale::LeaveOut
+            };
+            s.by_hand = match (pick, off_scale) {
+                (ModelPick::Auto, OffScale::LeaveOut) => None,
+                _ => Some(fit_rows_as(site, &s.viscometer, &s.rows, pick, off_scale)),
             };
             s.pick = pick;
+            s.include_off_scale = asked.include_off_scale;
         }
-        s.shear_rate_per_s = rate.or(s.shear_rate_per_s);
+        s.shear_rate_per_s = asked.rate.or(s.shear_rate_per_s);
     }
 
     /// The newest set, if any.
@@ -398,6 +418,7 @@ fn fitted_set(site: &Site, payload: &Payload) -> Option<ViscometerSet> {
         curve: fit_rows(site, viscometer, rows),
         pick: ModelPick::Auto,
         shear_rate_per_s: None,
+        include_off_scale: false,
         by_hand: None,
     })
 }
@@ -413,6 +434,17 @@ pub fn fit_rows_with(
     viscometer: &str,
     rows: &[DialRow],
     pick: ModelPick,
+) -> Result<FlowCurve, SetError> {
+    fit_rows_as(site, viscometer, rows, pick, OffScale::LeaveOut)
+}
+
+/// The rows fitted with a model pick and a rule for pegged readings.
+pub fn fit_rows_as(
+    site: &Site,
+    viscometer: &str,
+    rows: &[DialRow],
+    pick: ModelPick,
+    off_scale: OffScale,
 ) -> Result<FlowCurve, SetError> {
     let Some(v) = site.viscometer(viscometer) else {
         let known: Vec<&str> = site.viscometers.iter().map(|v| v.id.as_str()).collect();
@@ -435,7 +467,15 @@ pub fn fit_rows_with(
     };
     let opts = FlowCurveOptions {
         model: pick,
+        off_scale,
         ..FlowCurveOptions::default()
     };
     Ok(analyse(input, &opts)?)
+}
+
+/// What a `choice` record asks for.
+struct Asked<'a> {
+    model: &'a str,
+    rate: Option<f64>,
+    include_off_scale: bool,
 }

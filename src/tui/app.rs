@@ -150,17 +150,21 @@ impl App {
         }
     }
 
-    /// For a choice record, the model its set showed before it.
-    fn pick_of_choice(&self, record: &Record) -> Option<crate::session::ModelPick> {
+    /// For a choice record, the model its set showed before it and whether pegged readings
+    /// were kept.
+    fn pick_of_choice(&self, record: &Record) -> Option<(crate::session::ModelPick, bool)> {
         let Payload::Choice { set, .. } = &record.payload else {
             return None;
         };
         let s = &self.ctx.session;
-        s.sets.iter().find(|e| e.seq == *set).map(|e| e.item.pick)
+        s.sets
+            .iter()
+            .find(|e| e.seq == *set)
+            .map(|e| (e.item.pick, e.item.include_off_scale))
     }
 
     /// Journal what the tool answered for a record just applied.
-    fn answer(&mut self, record: &Record, pick_before: Option<crate::session::ModelPick>) {
+    fn answer(&mut self, record: &Record, pick_before: Option<(crate::session::ModelPick, bool)>) {
         let seq = record.seq;
         match &record.payload {
             Payload::ViscometerSet { .. } => {
@@ -179,7 +183,7 @@ impl App {
                 let Some(entry) = self.ctx.session.sets.iter().find(|e| e.seq == *set) else {
                     return;
                 };
-                if pick_before == Some(entry.item.pick) {
+                if pick_before == Some((entry.item.pick, entry.item.include_off_scale)) {
                     return;
                 }
                 let hand = entry.item.by_hand.as_ref().and_then(|c| c.as_ref().ok());

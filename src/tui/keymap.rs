@@ -37,6 +37,8 @@ pub enum Action {
     AutoModel,
     /// Show the API RP 13D field relations in place of the model (and back).
     ToggleRelations,
+    /// Keep readings at or above full scale in the fit, or leave them out again.
+    TogglePegged,
     Accept,
     AcceptNext,
     AcceptPrev,

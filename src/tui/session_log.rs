@@ -204,7 +204,13 @@ pub fn summarize(payload: &Payload, equipment: Option<&str>) -> String {
             set,
             model,
             shear_rate_per_s,
+            include_off_scale,
         } => {
+            let pegged = if *include_off_scale {
+                ", pegged readings kept in the fit"
+            } else {
+                ""
+            };
             let rate = shear_rate_per_s
                 .map(|r| {
                     format!(
@@ -213,7 +219,7 @@ pub fn summarize(payload: &Payload, equipment: Option<&str>) -> String {
                     )
                 })
                 .unwrap_or_default();
-            format!("{} #{set}: {}{rate}", s::CHOICE, clean(model))
+            format!("{} #{set}: {}{rate}{pegged}", s::CHOICE, clean(model))
         }
         Payload::Note { text } => format!("{}{at}: {}", super::strings::note::SUMMARY, clean(text)),
         Payload::Finding { text, .. } => format!("{}{at}: {}", s::FINDING, clean(text)),

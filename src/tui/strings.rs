@@ -79,6 +79,7 @@ pub mod keys {
     pub const AUTO_MODEL: &str = "let the tool choose the model";
     pub const SET_RATE: &str = "new shear rate";
     pub const FIELD_RELATIONS: &str = "field relations / model";
+    pub const PEGGED: &str = "keep / leave out pegged readings";
     pub const TYPE_RATE: &str = "type a shear rate for the apparent viscosity";
     pub const ACCEPT: &str = "accept";
     pub const ACCEPT_NEXT: &str = "next field";
@@ -268,6 +269,10 @@ pub mod curve {
     pub const LIMITS_TITLE: &str = "Spec limits,";
     pub const RELATIONS_TITLE: &str = " Field relations (API RP 13D) ";
     pub const RELATIONS_FROM: &str = "From the 600 and 300 rpm dials, as fit reports them.";
+    pub const NO_PEGGED: &str =
+        "No reading of this set is pegged: every dial is below full scale, so all are in the fit.";
+    pub const PEGGED_KEPT: &str = "Pegged readings are now kept in the fit (journalled); their stress is only a lower bound, so the curve above them is not to be relied on. i leaves them out again.";
+    pub const PEGGED_LEFT_OUT: &str = "Pegged readings are left out of the fit again (journalled).";
     pub const NO_RELATIONS: &str = "No field relations: they need the standard six-speed instrument with 600 and 300 rpm read (not pegged).";
     pub const LIMITS_AT: &str = "at";
     pub const LIMITS_AS_MEASURED: &str = "as measured";

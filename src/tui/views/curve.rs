@@ -43,6 +43,12 @@ const KEYS: &[Binding] = &[
         Action::ToggleRelations,
         keys::FIELD_RELATIONS,
     ),
+    h(
+        Scope::View,
+        &[Key::Char('i')],
+        Action::TogglePegged,
+        keys::PEGGED,
+    ),
 ];
 
 /// The model choices in the order `m` steps through them.
@@ -162,6 +168,29 @@ impl CurveView {
 }
 
 impl CurveView {
+    /// Keep pegged readings in the fit, or leave them out again: a journalled choice, so the
+    /// report and a resume show the same curve.
+    fn toggle_pegged(&self, ctx: &Ctx) -> Vec<Effect> {
+        let Some(entry) = ctx.session.latest_set() else {
+            return Vec::new();
+        };
+        let pegged = entry
+            .item
+            .curve
+            .as_ref()
+            .map_or(0, |c| c.left_out.len());
+        if pegged == 0 && !entry.item.include_off_scale {
+            return vec![Effect::Status(s::NO_PEGGED.to_string())];
+        }
+        let include = !entry.item.include_off_scale;
+        let rate = self.rate_now(&entry.item);
+        let status = if include { s::PEGGED_KEPT } else { s::PEGGED_LEFT_OUT };
+        vec![
+            choice_with(entry, entry.item.pick, rate, include),
+            Effect::Status(status.to_string()),
+        ]
+    }
+
     fn toggle_relations(&mut self, ctx: &Ctx) -> Vec<Effect> {
         let has = ctx
             .session
@@ -177,12 +206,22 @@ impl CurveView {
     }
 }
 
-/// A `choice` record: what is to be shown for the set.
+/// A `choice` record: what is to be shown for the set (pegged readings as they are).
 fn choice(entry: &Entry<ViscometerSet>, pick: ModelPick, rate: Option<f64>) -> Effect {
+    choice_with(entry, pick, rate, entry.item.include_off_scale)
+}
+
+fn choice_with(
+    entry: &Entry<ViscometerSet>,
+    pick: ModelPick,
+    rate: Option<f64>,
+    include_off_scale: bool,
+) -> Effect {
     let payload = Payload::Choice {
         set: entry.seq,
         model: pick.name().to_string(),
         shear_rate_per_s: rate,
+        include_off_scale,
     };
     Effect::Journal(Draft {
         summary: summarize(&payload, entry.equipment.as_deref()),
@@ -269,6 +308,7 @@ impl View for CurveView {
         match action {
             Action::NextModel | Action::Right => self.step_model(ctx, 1),
             Action::PrevModel | Action::Left => self.step_model(ctx, -1),
+            Action::TogglePegged => self.toggle_pegged(ctx),
             Action::AutoModel => match ctx.session.latest_set() {
                 Some(e) => vec![choice(e, ModelPick::Auto, self.rate_now(&e.item))],
                 None => Vec::new(),
