@@ -38,6 +38,7 @@ mod site_tank;
 mod trend;
 mod trend_sets;
 mod tui_e2e;
+mod tui_findings;
 mod tui_keys;
 mod tui_line;
 mod tui_render;

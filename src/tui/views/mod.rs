@@ -3,6 +3,7 @@
 //! list below. Helper files a view splits off are declared as plain modules.
 
 mod curve_panel;
+mod findings_draw;
 mod line_draw;
 mod readings_draw;
 mod readings_form;
@@ -99,5 +100,6 @@ views! {
     curve::CurveView,
     line::LineView,
     restart::RestartView,
+    findings::FindingsView,
     journal::JournalView,
 }
