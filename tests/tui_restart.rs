@@ -166,7 +166,10 @@ fn fields_own_every_printable_key() {
     assert!(matches!(a.context(), Context::Top(_)));
     assert!(!screen(&a).contains("q n "));
     let ids: Vec<_> = a.views().iter().map(|v| v.id()).collect();
-    let next = ids.iter().position(|id| *id == views::restart::ID).map(|i| ids[i + 1]);
+    let next = ids
+        .iter()
+        .position(|id| *id == views::restart::ID)
+        .map(|i| ids[i + 1]);
     press(&mut a, KeyCode::Tab);
     assert_eq!(Some(a.active_id()), next);
 }

@@ -40,15 +40,10 @@ impl FindingsScreen<'_> {
         }
     }
 
-    /// Lines about the last guided check, wrapped, above the list.
+    /// The last guided check's note (what it read and assumed), wrapped, above the list.
     fn assumed_lines(&self, t: &Theme) -> Vec<Line<'static>> {
         self.assumed
-            .map(|a| {
-                vec![Line::from(vec![
-                    Span::styled(format!("{}: ", s::ASSUMED), t.title),
-                    Span::raw(a.to_string()),
-                ])]
-            })
+            .map(|a| vec![Line::styled(a.to_string(), t.title)])
             .unwrap_or_default()
     }
 
@@ -59,8 +54,11 @@ impl FindingsScreen<'_> {
         let inner = block.inner(area);
         frame.render_widget(block, area);
         let head = self.assumed_lines(t);
-        // The note about the last check takes up to four wrapped rows.
-        let head_h = if head.is_empty() { 0 } else { 4 };
+        // The note about the last check, whole, but never more than half the panel.
+        let head_h = self.assumed.map_or(0, |a| {
+            wrapped_rows(a, usize::from(inner.width)).min(usize::from(inner.height / 2))
+        });
+        let head_h = u16::try_from(head_h).unwrap_or(0);
         let [top, list, hint] = Layout::vertical([
             Constraint::Length(head_h),
             Constraint::Min(0),
@@ -146,5 +144,39 @@ impl FindingsScreen<'_> {
             .wrap(Wrap { trim: false })
             .scroll((self.scroll, 0));
         frame.render_widget(p, inner);
+    }
+}
+
+/// Rows `text` takes when wrapped at word boundaries into `width` columns (a word longer
+/// than the width is cut across rows, as the paragraph does).
+pub fn wrapped_rows(text: &str, width: usize) -> usize {
+    let width = width.max(1);
+    let mut rows = 1;
+    let mut used = 0;
+    for word in text.split_whitespace() {
+        let w = word.chars().count();
+        let need = if used == 0 { w } else { used + 1 + w };
+        if need <= width {
+            used = need;
+        } else {
+            // A new row, unless this is the first word; a long word runs on over more rows.
+            rows += usize::from(used > 0) + w.saturating_sub(1) / width;
+            used = (w - 1) % width + 1;
+        }
+    }
+    rows
+}
+
+#[cfg(test)]
+mod tests {
+    use super::wrapped_rows;
+
+    #[test]
+    fn rows_of_wrapped_text_count_whole_words() {
+        // Worked by hand: "aaa bbb" fits 7 columns; at 6 "bbb" goes to a second row.
+        assert_eq!(wrapped_rows("aaa bbb", 7), 1);
+        assert_eq!(wrapped_rows("aaa bbb", 6), 2);
+        assert_eq!(wrapped_rows("aaaaaaaaaa", 4), 3);
+        assert_eq!(wrapped_rows("", 10), 1);
     }
 }

@@ -4,6 +4,7 @@
 
 mod curve_panel;
 mod findings_draw;
+mod guided_draw;
 mod line_draw;
 mod readings_draw;
 mod readings_form;
@@ -100,6 +101,7 @@ views! {
     curve::CurveView,
     line::LineView,
     restart::RestartView,
+    guided::GuidedView,
     findings::FindingsView,
     journal::JournalView,
 }
