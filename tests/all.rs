@@ -39,6 +39,7 @@ mod trend;
 mod trend_sets;
 mod tui_e2e;
 mod tui_findings;
+mod tui_guided;
 mod tui_guided_e2e;
 mod tui_keys;
 mod tui_line;

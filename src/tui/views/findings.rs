@@ -17,11 +17,16 @@ use ratatui::layout::Rect;
 /// This view's id.
 pub const ID: ViewId = ViewId("findings");
 
-/// The Findings view's own keys.
-const KEYS: &[Binding] = &[
-    b(Scope::View, &[Key::Enter], Action::Activate, s::OPEN),
-    b(Scope::View, &[Key::Esc], Action::Close, s::BACK),
-];
+/// The Findings view's keys on its list.
+const LIST_KEYS: &[Binding] = &[b(Scope::View, &[Key::Enter], Action::Activate, s::OPEN)];
+
+/// Its keys with one finding open.
+const OPEN_KEYS: &[Binding] = &[b(
+    Scope::View,
+    &[Key::Esc, Key::Enter],
+    Action::Close,
+    s::BACK,
+)];
 
 /// Rows a page key scrolls the open finding by.
 const PAGE: u16 = 8;
@@ -102,7 +107,10 @@ impl View for FindingsView {
     }
 
     fn keys(&self) -> &'static [Binding] {
-        KEYS
+        match self.open {
+            Some(_) => OPEN_KEYS,
+            None => LIST_KEYS,
+        }
     }
 
     fn handle(&mut self, action: Action, _ctx: &Ctx) -> Vec<Effect> {

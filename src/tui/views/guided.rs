@@ -25,11 +25,14 @@ pub const ID: ViewId = ViewId("checks");
 /// Longest reading typed ("-12.345e-3 lbf/100ft2" and room to spare).
 const READING_MAX_CHARS: usize = 32;
 
-/// The Checks view's own keys; while typing, the field owns every other printable key.
-const KEYS: &[Binding] = &[
+/// The Checks view's keys on its list of checks.
+const LIST_KEYS: &[Binding] = &[b(Scope::View, &[Key::Enter], Action::Activate, s::START)];
+
+/// Its keys while a check is walked; while typing, the field owns every other printable key.
+const WALK_KEYS: &[Binding] = &[
     b(Scope::ViewTyping, &[Key::Enter, Key::Ctrl('s')], Action::Save, s::SAVE_READING),
     b(Scope::ViewTyping, &[Key::Ctrl('k')], Action::Skip, s::SKIP),
-    b(Scope::View, &[Key::Enter], Action::Activate, s::START),
+    b(Scope::View, &[Key::Enter], Action::Activate, s::TYPE),
     b(Scope::View, &[Key::Esc], Action::Close, s::STOP),
 ];
 
@@ -254,7 +257,10 @@ impl View for GuidedView {
     }
 
     fn keys(&self) -> &'static [Binding] {
-        KEYS
+        match self.walk {
+            Some(_) => WALK_KEYS,
+            None => LIST_KEYS,
+        }
     }
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {

@@ -70,7 +70,8 @@ impl GuidedScreen<'_> {
             lines.push(Line::raw(""));
             lines.push(Line::styled(style.text(m), t.warn));
         }
-        frame.render_widget(wrapped(lines), inner);
+        // Not trimmed: the marks and the indents at the start of a line are kept.
+        frame.render_widget(Paragraph::new(lines).wrap(Wrap { trim: false }), inner);
     }
 
     fn draw_walk(&self, frame: &mut Frame, area: Rect, w: &Walk, ctx: &Ctx) {
