@@ -151,7 +151,8 @@ pub const CHECKS: &[Check] = &[
     Check {
         id: CheckId::BatchThickerOrThinner,
         title: "Batch looks thicker or thinner than usual",
-        needs: "a line or pump the batch runs through (pick it on the Site view)",
+        needs: "a line the batch runs through (pick it on the Site view); best after a \
+                viscometer set of the batch, which the plant readings are compared with",
         steps: &[
             Step {
                 reading: "temperature",

@@ -55,8 +55,9 @@ impl FindingsScreen<'_> {
         frame.render_widget(block, area);
         let head = self.assumed_lines(t);
         // The note about the last check, whole, but never more than half the panel.
+        // A blank row under it keeps it apart from the list.
         let head_h = self.assumed.map_or(0, |a| {
-            wrapped_rows(a, usize::from(inner.width)).min(usize::from(inner.height / 2))
+            (wrapped_rows(a, usize::from(inner.width)) + 1).min(usize::from(inner.height / 2))
         });
         let head_h = u16::try_from(head_h).unwrap_or(0);
         let [top, list, hint] = Layout::vertical([
