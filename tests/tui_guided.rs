@@ -180,6 +180,19 @@ fn the_pump_check_files_each_reading_on_its_equipment_and_says_what_it_assumed()
     assert!(text.contains("assumed: no gel test"), "{text}");
     assert!(text.contains("no temperature"), "{text}");
     assert_eq!(a.active_id(), views::findings::ID);
+    // Once the check's records are in, its findings are journalled too, worst first.
+    let last = records.last().map(|r| r.payload.clone());
+    let Some(Payload::Note { text }) = last else {
+        panic!("the findings note last, got {last:?}");
+    };
+    assert!(
+        text.starts_with("Findings at the end of guided check 'Pump will not start"),
+        "{text}"
+    );
+    assert!(
+        text.contains("1. ALARM, certain: pump P-2. The discharge pressure is above"),
+        "{text}"
+    );
     let found = rules(&a);
     // 13 bar above the 12 bar relief; the site's gel after 62 h (520 Pa) needs 13.1 bar
     // (force balance, see tui_guided_e2e).

@@ -2,8 +2,8 @@
 //! pseudo-terminal at 80×24 on the demo site. Line L-2 and filler-paste are picked, the
 //! check asks for the stop (62 h, a weekend), the gel test is skipped, the discharge
 //! pressure is typed (13 bar), the temperature skipped; the check ends on the Findings view
-//! with the restart and relief findings, which are then found in the journal and in
-//! `rheoside report`.
+//! with the restart and relief findings, which are then found in the journal (a note the
+//! check writes once its readings are in) and in `rheoside report`.
 
 use crate::tui_e2e::{Session, journal_in};
 use rheoside::journal::{Payload, load};
@@ -71,11 +71,22 @@ fn the_pump_will_not_start_check_ends_on_its_findings() {
     ]
     .map(|(a, b, c)| (a.to_string(), b.to_string(), Some(c.to_string())));
     assert_eq!(readings, want);
-    let note = journal.records.iter().find_map(|r| match &r.payload {
-        Payload::Note { text } => Some(text.clone()),
-        _ => None,
-    });
-    let note = note.expect("the check's note");
+    let notes: Vec<String> = journal
+        .records
+        .iter()
+        .filter_map(|r| match &r.payload {
+            Payload::Note { text } => Some(text.clone()),
+            _ => None,
+        })
+        .collect();
+    let [note, found] = notes.as_slice() else {
+        panic!("two notes (what was read and assumed, then the findings): {notes:?}");
+    };
+    assert!(found.contains("The line will not restart now"), "{found}");
+    assert!(
+        found.contains("ALARM, certain: pump P-2. The discharge pressure is above"),
+        "{found}"
+    );
     assert!(
         note.contains("read rest-time 62 h, discharge-pressure 13 bar"),
         "{note}"

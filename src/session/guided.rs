@@ -151,8 +151,7 @@ pub const CHECKS: &[Check] = &[
     Check {
         id: CheckId::BatchThickerOrThinner,
         title: "Batch looks thicker or thinner than usual",
-        needs: "a line the batch runs through (pick it on the Site view); best after a \
-                viscometer set of the batch, which the plant readings are compared with",
+        needs: "a line the batch runs through; best after a viscometer set of it",
         steps: &[
             Step {
                 reading: "temperature",
@@ -316,6 +315,28 @@ pub fn summary(check: &Check, target: &Target, outcomes: &[Outcome]) -> String {
     )
 }
 
+/// The start of the note journalled once a check's records are in: its findings.
+pub const FINDINGS_PREFIX: &str = "Findings at the end of guided check";
+
+/// "Findings at the end of guided check '…' on line L-2, pump P-2 (2, worst first):
+/// 1. ALARM, certain: … 2. …", from the findings' headlines in rank order.
+pub fn findings_note(check: &Check, target: &Target, headlines: &[String]) -> String {
+    let head = format!("{FINDINGS_PREFIX} '{}' on {}", check.title, target.words());
+    if headlines.is_empty() {
+        return format!("{head}: none.");
+    }
+    let listed: Vec<String> = headlines
+        .iter()
+        .enumerate()
+        .map(|(i, h)| format!("{}. {h}", i + 1))
+        .collect();
+    format!(
+        "{head} ({}, worst first): {}",
+        headlines.len(),
+        listed.join(" ")
+    )
+}
+
 /// The newest guided-check note in the session, for the findings to show beside them.
 pub fn latest_summary(state: &SessionState) -> Option<String> {
     state
@@ -391,6 +412,12 @@ mod tests {
             "{text}"
         );
         assert!(text.contains("assumed: no gel test"), "{text}");
+        let f = findings_note(c, &t, &["ALARM, certain: pump P-2. Too high.".into()]);
+        assert!(
+            f.ends_with("(1, worst first): 1. ALARM, certain: pump P-2. Too high."),
+            "{f}"
+        );
+        assert!(findings_note(c, &t, &[]).ends_with("pump P-2: none."));
         let all = [Outcome::Read("1".into()), Outcome::Read("2".into())];
         assert!(summary(c, &t, &all).contains("no step skipped"));
     }

@@ -7,7 +7,9 @@
 
 use super::guided_draw;
 use super::{Draft, Effect, View, ViewId};
-use crate::journal::Payload;
+use crate::journal::{Payload, Record};
+use crate::present::findings::words;
+use crate::session::findings::findings;
 use crate::readings::parse_reading_arg_at;
 use crate::session::guided::{self, CHECKS, Check, Outcome, Target};
 use crate::tui::ctx::Ctx;
@@ -50,10 +52,21 @@ pub struct Walk {
     pub preview: Option<Result<String, String>>,
 }
 
+/// A finished check whose records are still on their way to the journal: once they are all
+/// in the state, its findings are journalled as a note.
+#[derive(Debug, Clone, PartialEq)]
+struct Closing {
+    check: &'static Check,
+    target: Target,
+}
+
 #[derive(Debug, Default)]
 pub struct GuidedView {
     cursor: usize,
     walk: Option<Walk>,
+    /// Records this view sent that the journal has not numbered yet.
+    outstanding: Vec<(Option<String>, Payload)>,
+    closing: Option<Closing>,
     /// The message under the step or the list (a refusal, or what just happened).
     message: Option<String>,
 }
@@ -165,6 +178,8 @@ impl GuidedView {
             Some(Ok(p)) => p,
         };
         let equipment = walk.target.equipment(step.at).map(str::to_string);
+        self.outstanding
+            .push((equipment.clone(), parsed.payload()));
         let mut effects = vec![Effect::Journal(draft(parsed.payload(), equipment))];
         if let Some(note) = parsed.conversion_note() {
             effects.push(Effect::Status(note));
@@ -200,8 +215,14 @@ impl GuidedView {
             .or(walk.target.tank.clone())
             .or(walk.target.pump.clone());
         self.message = Some(s::FINISHED.to_string());
+        let note = Payload::Note { text };
+        self.outstanding.push((equipment.clone(), note.clone()));
+        self.closing = Some(Closing {
+            check: walk.check,
+            target: walk.target,
+        });
         vec![
-            Effect::Journal(draft(Payload::Note { text }, equipment)),
+            Effect::Journal(draft(note, equipment)),
             Effect::Status(s::FINISHED.to_string()),
             Effect::Show(super::findings::ID),
         ]
@@ -275,6 +296,32 @@ impl View for GuidedView {
             _ => {}
         }
         Vec::new()
+    }
+
+    fn answer(&mut self, record: &Record, ctx: &Ctx) -> Vec<Effect> {
+        let ours = self
+            .outstanding
+            .iter()
+            .position(|(e, p)| *p == record.payload && *e == record.equipment);
+        let Some(i) = ours else {
+            return Vec::new();
+        };
+        self.outstanding.remove(i);
+        if !self.outstanding.is_empty() {
+            return Vec::new();
+        }
+        let Some(c) = self.closing.take() else {
+            return Vec::new();
+        };
+        // In the site's units, not folded: the journal is not the screen.
+        let style = crate::present::Style::new(ctx.site.unit_system, false);
+        let headlines: Vec<String> = findings(&ctx.session, &ctx.site)
+            .iter()
+            .map(|f| words(f, style).headline)
+            .collect();
+        let text = guided::findings_note(c.check, &c.target, &headlines);
+        let equipment = c.target.line.clone().or(c.target.tank.clone());
+        vec![Effect::Journal(draft(Payload::Note { text }, equipment))]
     }
 
     fn render(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {
