@@ -4,7 +4,8 @@
 //! that step, and what is assumed when the step is skipped. The faces only drive them.
 //!
 //! The order of the steps follows common practice (no source): what is known without
-//! touching the plant first, then what needs a gauge or a sample.
+//! touching the plant first, then what needs a gauge or a sample. Each step asks for a
+//! reading the findings use (`session::findings`); one kept only for the handover says so.
 
 use super::state::SessionState;
 use crate::readings::{ReadingKind, find};
@@ -97,15 +98,6 @@ pub const CHECKS: &[Check] = &[
                 if_skipped: "no discharge pressure: the pump's pressure against its relief \
                              setting was not checked",
             },
-            Step {
-                reading: "temperature",
-                ask: "Product temperature in the line, from a thermometer on the line or \
-                      the nearest tapping.",
-                at: At::Line,
-                caution: "Hot lines burn: read from the gauge, do not touch bare pipe.",
-                if_skipped: "no temperature: the product was taken at its reference \
-                             temperature, and the coldest expected case is judged too",
-            },
         ],
     },
     Check {
@@ -156,10 +148,12 @@ pub const CHECKS: &[Check] = &[
             Step {
                 reading: "temperature",
                 ask: "Product temperature where the batch is sampled: a cold batch looks \
-                      thick, a hot one thin.",
+                      thick, a hot one thin. Kept for the handover: the findings judge the \
+                      viscometer set's own temperature.",
                 at: At::Line,
                 caution: SAMPLE,
-                if_skipped: "no temperature: the batch was taken at its reference temperature",
+                if_skipped: "no temperature at the line: only the viscometer set's own \
+                             temperature was judged",
             },
             Step {
                 reading: "flow",
@@ -176,14 +170,6 @@ pub const CHECKS: &[Check] = &[
                 caution: WEAKEST,
                 if_skipped: "no pressure drop: the plant was not compared with the \
                              viscometer's curve",
-            },
-            Step {
-                reading: "solids-content",
-                ask: "Solids content of a sample, from the lab or a moisture balance \
-                      (e.g. 28 %).",
-                at: At::Line,
-                caution: SAMPLE,
-                if_skipped: "no solids content: the batch recipe was assumed to be as usual",
             },
         ],
     },
@@ -403,7 +389,6 @@ mod tests {
             Outcome::Read("62 h".into()),
             Outcome::Skipped,
             Outcome::Read("13 bar".into()),
-            Outcome::Skipped,
         ];
         let text = summary(c, &t, &o);
         assert!(text.starts_with(NOTE_PREFIX), "{text}");
