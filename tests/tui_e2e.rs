@@ -20,7 +20,7 @@ use std::time::{Duration, Instant};
 const WAIT: Duration = Duration::from_secs(30);
 
 /// The binary running in a pty, its screen parsed as it arrives.
-struct Session {
+pub(crate) struct Session {
     child: Box<dyn Child + Send + Sync>,
     writer: Box<dyn Write + Send>,
     screen: Arc<Mutex<vt100::Parser>>,
@@ -29,7 +29,7 @@ struct Session {
 }
 
 impl Session {
-    fn start(args: &[&str]) -> Session {
+    pub(crate) fn start(args: &[&str]) -> Session {
         Session::start_on(args, "xterm-256color")
     }
 
@@ -72,18 +72,18 @@ impl Session {
         }
     }
 
-    fn text(&self) -> String {
+    pub(crate) fn text(&self) -> String {
         self.screen.lock().expect("screen lock").screen().contents()
     }
 
     /// Poll the parsed screen until it holds `want` (no fixed sleeps).
-    fn wait_for(&self, want: &str) -> String {
+    pub(crate) fn wait_for(&self, want: &str) -> String {
         self.wait_for_all(&[want])
     }
 
     /// Poll until every piece is on screen at once: a frame arrives in several writes, so
     /// one piece being there says nothing of the rest.
-    fn wait_for_all(&self, want: &[&str]) -> String {
+    pub(crate) fn wait_for_all(&self, want: &[&str]) -> String {
         let start = Instant::now();
         loop {
             let text = self.text();
@@ -98,14 +98,14 @@ impl Session {
         }
     }
 
-    fn send(&mut self, keys: &str) {
+    pub(crate) fn send(&mut self, keys: &str) {
         self.writer
             .write_all(keys.as_bytes())
             .expect("typing into the pty");
         self.writer.flush().expect("flushing the pty");
     }
 
-    fn wait_exit(&mut self) -> portable_pty::ExitStatus {
+    pub(crate) fn wait_exit(&mut self) -> portable_pty::ExitStatus {
         let start = Instant::now();
         loop {
             if let Some(status) = self.child.try_wait().expect("child status") {
@@ -137,7 +137,7 @@ impl Session {
     }
 }
 
-fn journal_in(dir: &Path) -> PathBuf {
+pub(crate) fn journal_in(dir: &Path) -> PathBuf {
     let files: Vec<PathBuf> = std::fs::read_dir(dir)
         .expect("the log folder")
         .filter_map(|e| e.ok().map(|e| e.path()))

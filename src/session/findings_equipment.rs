@@ -68,12 +68,33 @@ fn flow_index(state: &SessionState) -> Option<Measured> {
 /// product set in the session that has a gel build-up on the site.
 pub fn restarts(state: &SessionState, site: &Site) -> Vec<RestartFacts> {
     let mut out = Vec::new();
-    for (subject, answer, stop) in restart_answers(state, site) {
-        let margin = answer.input.margin;
-        out.push(restart_facts(&subject, &answer.now, margin, stop, "now"));
-        if let Some(cold) = &answer.cold {
+    for j in judged(state, site) {
+        let margin = j.answer.input.margin;
+        // One gel stress read after the stop says nothing of how the gel builds up, so no
+        // longest safe stop is judged from it.
+        let longest = |case: &RestartCase| match j.gel_read {
+            Some(_) => None,
+            None => longest_safe_stop(case),
+        };
+        let now = &j.answer.now;
+        out.push(restart_facts(
+            &j.subject,
+            now,
+            margin,
+            j.stop,
+            longest(now),
+            "now",
+        ));
+        if let Some(cold) = &j.answer.cold {
             let when = "at the line's coldest expected temperature";
-            out.push(restart_facts(&subject, cold, margin, stop, when));
+            out.push(restart_facts(
+                &j.subject,
+                cold,
+                margin,
+                j.stop,
+                longest(cold),
+                when,
+            ));
         }
     }
     out
@@ -85,6 +106,43 @@ pub fn restart_answers(
     state: &SessionState,
     site: &Site,
 ) -> Vec<(String, RestartAnswer, Option<f64>)> {
+    judged(state, site)
+        .into_iter()
+        .map(|j| (j.subject, j.answer, j.stop))
+        .collect()
+}
+
+/// One line's restart as judged for the findings.
+struct Judged {
+    subject: String,
+    answer: RestartAnswer,
+    /// The stop recorded at the line or its pump, s.
+    stop: Option<f64>,
+    /// A gel stress read after that stop (a guided check's gel test), Pa.
+    gel_read: Option<f64>,
+}
+
+/// The newest gel stress read at `at` after the newest stop recorded there: the gel at that
+/// stop. Rested-gel readings taken before the stop (the Restart view journals its rests and
+/// gels, then the stop) are a build-up, not this stop's gel, and are left to the site's.
+fn gel_after_stop(state: &SessionState, at: &[&str]) -> Option<f64> {
+    let here = |e: &Option<String>| e.as_deref().is_some_and(|e| at.contains(&e));
+    let stop_seq = state
+        .readings
+        .iter()
+        .rev()
+        .find(|r| r.item.name == "rest-time" && here(&r.equipment))?
+        .seq;
+    state
+        .readings
+        .iter()
+        .rev()
+        .take_while(|r| r.seq > stop_seq)
+        .find(|r| r.item.name == "yield-stress" && here(&r.equipment))
+        .map(|r| r.item.value_si)
+}
+
+fn judged(state: &SessionState, site: &Site) -> Vec<Judged> {
     let Some((product, assumed)) = restart_product(state, site) else {
         return Vec::new();
     };
@@ -102,25 +160,31 @@ pub fn restart_answers(
             // No set names the product and no stop was recorded here: nothing to judge.
             continue;
         }
-        let Ok(input) = from_site(
-            site,
-            (&line.id, &pump.id, product),
-            GelSource::Product,
-            stop,
-        ) else {
+        let gel_read = gel_after_stop(state, &at);
+        let source = gel_read.map_or(GelSource::Product, GelSource::Stress);
+        let Ok(input) = from_site(site, (&line.id, &pump.id, product), source, stop) else {
             continue;
         };
         let Ok(answer) = analyse(input) else {
             continue;
         };
+        let gel = match gel_read {
+            Some(_) => ", gel read after the stop",
+            None => "",
+        };
         let subject = match assumed {
-            false => format!("line {} with pump {}, {product}", line.id, pump.id),
+            false => format!("line {} with pump {}, {product}{gel}", line.id, pump.id),
             true => format!(
-                "line {} with pump {}, {product} assumed (the only product with a gel build-up)",
+                "line {} with pump {}, {product} assumed (the only product with a gel build-up){gel}",
                 line.id, pump.id
             ),
         };
-        out.push((subject, answer, stop));
+        out.push(Judged {
+            subject,
+            answer,
+            stop,
+            gel_read,
+        });
     }
     out
 }
@@ -145,14 +209,9 @@ fn restart_product<'s>(state: &'s SessionState, site: &'s Site) -> Option<(&'s s
     }
 }
 
-fn restart_facts(
-    subject: &str,
-    case: &RestartCase,
-    margin: f64,
-    stop_s: Option<f64>,
-    when: &str,
-) -> RestartFacts {
-    let longest = case.max_stop.seconds().map(|value| Measured {
+/// The longest safe stop of a case, with its band.
+fn longest_safe_stop(case: &RestartCase) -> Option<Measured> {
+    case.max_stop.seconds().map(|value| Measured {
         value,
         interval: case.max_stop_band.map(|b| {
             (
@@ -160,7 +219,17 @@ fn restart_facts(
                 b.high.seconds().unwrap_or(f64::INFINITY),
             )
         }),
-    });
+    })
+}
+
+fn restart_facts(
+    subject: &str,
+    case: &RestartCase,
+    margin: f64,
+    stop_s: Option<f64>,
+    longest: Option<Measured>,
+    when: &str,
+) -> RestartFacts {
     RestartFacts {
         subject: subject.to_string(),
         needed_pa: Measured {

@@ -14,6 +14,7 @@ pub mod findings_equipment;
 mod findings_line;
 mod findings_tank;
 pub mod flow_curve;
+pub mod guided;
 pub mod line;
 pub mod line_plant;
 pub mod line_words;

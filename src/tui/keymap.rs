@@ -27,6 +27,8 @@ pub enum Action {
     Activate,
     Type(char),
     Save,
+    /// Go on without what is asked (a guided check's step).
+    Skip,
     AddRow,
     RemoveRow,
     /// To the speed or the dial column of the same row.

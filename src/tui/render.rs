@@ -125,17 +125,30 @@ fn draw_top(frame: &mut Frame, area: Rect, ctx: &Ctx) {
     );
 }
 
+/// The view tabs: padded when they fit, else packed (one space between, the active one
+/// still padded) so that every view's name shows at 80 columns.
 fn draw_tabs(frame: &mut Frame, area: Rect, app: &App) {
     let t = &app.ctx.theme;
     let active = app.active_id();
+    let titles: Vec<(&str, bool)> = app
+        .views()
+        .iter()
+        .map(|v| (v.title(), v.id() == active))
+        .collect();
+    let padded: usize = 1 + titles
+        .iter()
+        .map(|(t, _)| t.chars().count() + 3)
+        .sum::<usize>();
+    let roomy = padded <= usize::from(area.width);
     let mut spans = vec![Span::raw(" ")];
-    for v in app.views() {
-        let style = if v.id() == active {
-            t.tab_active
+    for (title, is_active) in titles {
+        let style = if is_active { t.tab_active } else { t.tab };
+        let text = if roomy || is_active {
+            format!(" {title} ")
         } else {
-            t.tab
+            title.to_string()
         };
-        spans.push(Span::styled(format!(" {} ", v.title()), style));
+        spans.push(Span::styled(text, style));
         spans.push(Span::raw(" "));
     }
     frame.render_widget(Paragraph::new(Line::from(spans)), area);

@@ -3,6 +3,8 @@
 //! list below. Helper files a view splits off are declared as plain modules.
 
 mod curve_panel;
+mod findings_draw;
+mod guided_draw;
 mod line_draw;
 mod readings_draw;
 mod readings_form;
@@ -100,5 +102,7 @@ views! {
     curve::CurveView,
     line::LineView,
     restart::RestartView,
+    guided::GuidedView,
+    findings::FindingsView,
     journal::JournalView,
 }
