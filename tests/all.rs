@@ -40,5 +40,6 @@ mod tui_keys;
 mod tui_line;
 mod tui_render;
 mod tui_restart;
+mod tui_tank;
 mod units;
 mod units_plant;

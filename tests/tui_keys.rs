@@ -192,6 +192,7 @@ fn tab_and_shift_tab_walk_the_views() {
             views::curve::ID,
             views::line::ID,
             views::restart::ID,
+            views::tank::ID,
             views::journal::ID,
             views::site::ID
         ]

@@ -166,7 +166,7 @@ fn fields_own_every_printable_key() {
     assert!(matches!(a.context(), Context::Top(_)));
     assert!(!screen(&a).contains("q n "));
     press(&mut a, KeyCode::Tab);
-    assert_eq!(a.active_id(), views::journal::ID);
+    assert_eq!(a.active_id(), views::tank::ID);
 }
 
 #[test]

@@ -8,6 +8,10 @@ mod readings_draw;
 mod readings_form;
 mod restart_draw;
 pub mod restart_form;
+mod tank_draw;
+pub mod tank_form;
+mod tank_sketch;
+mod tank_text;
 
 use super::ctx::Ctx;
 use super::keymap::{Action, Binding};
@@ -99,5 +103,6 @@ views! {
     curve::CurveView,
     line::LineView,
     restart::RestartView,
+    tank::TankView,
     journal::JournalView,
 }
