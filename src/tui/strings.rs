@@ -291,6 +291,12 @@ pub mod line {
     pub const DESIGN: &str = "design";
     pub const CAUTIONS: &str = "Cautions";
     pub const SOURCE: &str = "Curve";
+    pub const SCROLL: &str = "PgUp/PgDn";
+    pub const LEGEND_PUMP: &str = "pump";
+    pub const LEGEND_DUTY: &str = "duty";
+    pub const RELIEF: &str = "relief";
+    pub const NO_PUMP: &str = "No pump feeds this line in the site config.";
+    pub const NO_PUMP_ANSWER: &str = "No pump answer";
 }
 
 /// Journal view.

@@ -4,6 +4,7 @@
 
 mod curve_panel;
 mod line_draw;
+pub mod line_pump;
 mod readings_draw;
 mod readings_form;
 mod restart_draw;
@@ -12,6 +13,7 @@ mod tank_draw;
 pub mod tank_form;
 mod tank_sketch;
 mod tank_text;
+mod text_rows;
 
 use super::ctx::Ctx;
 use super::keymap::{Action, Binding};
