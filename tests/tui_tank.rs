@@ -226,3 +226,39 @@ fn the_answer_scrolls_to_the_cautions() {
     assert_ne!(screen(&a), there);
     let _ = here;
 }
+
+// Fast on the slurry tank, the motor's power number falls on the flat, turbulent part of
+// the pitched-blade curve, where power hardly depends on viscosity (Metzner–Otto's method
+// reads viscosity only where Np falls with Re): no viscosity is read back, and it says why.
+#[test]
+fn a_turbulent_motor_reading_is_refused_in_words() {
+    let mut a = on_tank_view(Glyphs::Unicode);
+    // Right on the tank row picks the next tank.
+    press(&mut a, KeyCode::Right);
+    assert!(screen(&a).contains("< TK-2 >"));
+    press(&mut a, KeyCode::Down);
+    type_text(&mut a, "300 rpm");
+    press(&mut a, KeyCode::Tab);
+    type_text(&mut a, "8");
+    ctrl(&mut a, 's');
+    let records = support::journal_answers(&mut a, true);
+    let Some(Payload::Result { data, from, .. }) = records.last().map(|r| &r.payload) else {
+        panic!("expected the tank result");
+    };
+    assert_eq!(from.len(), 2);
+    assert_eq!(data["tank"], "TK-2");
+    assert!(
+        data["apparent_viscosity_from_power_pa_s"].is_null(),
+        "{data}"
+    );
+    let warned = data["warnings"].as_array().is_some_and(|w| {
+        w.iter()
+            .any(|x| x.as_str().is_some_and(|t| t.contains("turbulent")))
+    });
+    assert!(warned, "{data}");
+    // The motor line is under the power, torque and power per volume: two pages down.
+    press(&mut a, KeyCode::PageDown);
+    press(&mut a, KeyCode::PageDown);
+    let s = screen(&a);
+    assert!(s.contains("viscosity read back from it"), "{s}");
+}

@@ -403,6 +403,7 @@ pub mod tank {
     pub const SHAFT: &str = "Shaft power from the motor";
     pub const VISC_MOTOR: &str = "Viscosity from the motor";
     pub const VISC_METER: &str = "Viscometer's";
+    pub const REFUSED_SEE_FINDINGS: &str = "No viscosity read back from it (why: Findings).";
     pub const CAVERN: &str = "Cavern";
     pub const ACROSS: &str = "across";
     pub const IN_TANK: &str = "in a tank of";

@@ -144,7 +144,7 @@ fn motor(a: &TankAnswer, sys: UnitSystem) -> String {
         units::format(m.shaft_power_w, Dimension::Power, sys)
     );
     let Some(done) = m.done() else {
-        return shaft;
+        return format!("{shaft} {}", s::REFUSED_SEE_FINDINGS);
     };
     let r = &done.apparent_viscosity_range_pa_s;
     let mut text = format!(
@@ -172,7 +172,12 @@ fn cavern(a: &TankAnswer, sys: UnitSystem) -> String {
     let Some(c) = &a.cavern else {
         return s::NO_CAVERN.to_string();
     };
-    let len = |m: f64| units::format(m, Dimension::Length, sys);
+    // Tank sizes in metres (or feet), not the pipe sizes' millimetres.
+    let unit = match sys {
+        UnitSystem::Si => "m",
+        UnitSystem::UsCustomary => "ft",
+    };
+    let len = |m: f64| units::format_in(m, Dimension::Length, unit);
     let tank = a
         .request
         .vessel
