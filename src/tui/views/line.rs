@@ -66,12 +66,15 @@ pub struct LineView {
     /// The text panel's scroll, and how far it can go as last drawn.
     scroll: u16,
     scroll_most: Cell<u16>,
+    /// Rows of the text panel as last drawn: PgUp/PgDn move by this less one.
+    page: Cell<u16>,
 }
 
 impl LineView {
     pub fn new(_ctx: &Ctx) -> LineView {
         LineView {
             scroll_most: Cell::new(u16::MAX),
+            page: Cell::new(4),
             ..LineView::default()
         }
     }
@@ -264,11 +267,12 @@ impl View for LineView {
                 self.thicker_steps = 0;
             }
             Action::PageUp => {
-                self.scroll = self.scroll.saturating_sub(4);
+                self.scroll = self.scroll.saturating_sub(self.page.get());
                 return Vec::new();
             }
             Action::PageDown => {
-                self.scroll = self.scroll.saturating_add(4).min(self.scroll_most.get());
+                let to = self.scroll.saturating_add(self.page.get());
+                self.scroll = to.min(self.scroll_most.get());
                 return Vec::new();
             }
             Action::Home => {
@@ -296,6 +300,7 @@ impl View for LineView {
                 thicker: THICKER_STEP * f64::from(self.thicker_steps),
                 scroll: self.scroll,
                 scroll_most: &self.scroll_most,
+                page: &self.page,
             },
         );
     }

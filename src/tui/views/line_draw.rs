@@ -29,6 +29,7 @@ pub struct LineScreen<'a> {
     /// The text panel's scroll; how far it can go is written back for the view's PgDn.
     pub scroll: u16,
     pub scroll_most: &'a Cell<u16>,
+    pub page: &'a Cell<u16>,
 }
 
 pub fn draw(frame: &mut Frame, area: Rect, ctx: &Ctx, screen: LineScreen) {
@@ -72,6 +73,7 @@ pub fn draw(frame: &mut Frame, area: Rect, ctx: &Ctx, screen: LineScreen) {
     // Scrolled no further than the last line at the bottom of the panel.
     let most = u16::try_from(rows.saturating_sub(usize::from(inner.height))).unwrap_or(0);
     screen.scroll_most.set(most);
+    screen.page.set(inner.height.saturating_sub(1).max(1));
     let styled: Vec<Line> = lines
         .into_iter()
         .map(|(title, text)| match title {

@@ -65,13 +65,16 @@ pub struct TankView {
     pending: Option<Pending>,
     /// The answer on screen (or why there is none).
     shown: Option<Result<TankLive, String>>,
-    /// The readings the journalled answer came from, once one was journalled.
-    from: Vec<u64>,
+    /// The tank and the inputs of the answer last journalled here: the screen says it is
+    /// journalled only while it shows that answer.
+    journalled: Option<(String, TankInputs)>,
     message: Option<String>,
     scroll: u16,
     /// How far the answer can scroll, as last drawn (PgDn stops there, so PgUp answers at
     /// once).
     scroll_most: Cell<u16>,
+    /// Rows of the answer panel as last drawn: PgUp/PgDn move by this less one.
+    page: Cell<u16>,
 }
 
 /// The tank the view is about: picked here, else the Site view's pick when it is a tank,
@@ -99,10 +102,11 @@ impl TankView {
             tank_pick: None,
             pending: None,
             shown: None,
-            from: Vec::new(),
+            journalled: None,
             message: None,
             scroll: 0,
             scroll_most: Cell::new(u16::MAX),
+            page: Cell::new(4),
         }
     }
 
@@ -131,6 +135,14 @@ impl TankView {
         });
     }
 
+    /// Whether the answer on screen is the one journalled here.
+    fn shows_journalled(&self) -> bool {
+        match (&self.journalled, &self.shown) {
+            (Some((tank, inputs)), Some(Ok(d))) => *tank == d.tank_id && *inputs == d.inputs,
+            _ => false,
+        }
+    }
+
     fn cycle_tank(&mut self, ctx: &Ctx, step: isize) {
         let tanks = &ctx.site.tanks;
         let Some(now) = self.target(ctx) else {
@@ -140,7 +152,6 @@ impl TankView {
         let n = tanks.len() as isize;
         if let Some(t) = tanks.get((at + step).rem_euclid(n) as usize) {
             self.tank_pick = Some(t.id.clone());
-            self.from.clear();
             self.scroll = 0;
             self.work_out(ctx);
         }
@@ -175,9 +186,10 @@ impl TankView {
             Action::Activate if focus == Focus::Save => return self.save(ctx),
             Action::Activate => self.form.next(),
             Action::Save => return self.save(ctx),
-            Action::PageUp => self.scroll = self.scroll.saturating_sub(4),
+            Action::PageUp => self.scroll = self.scroll.saturating_sub(self.page.get()),
             Action::PageDown => {
-                self.scroll = self.scroll.saturating_add(4).min(self.scroll_most.get());
+                let to = self.scroll.saturating_add(self.page.get());
+                self.scroll = to.min(self.scroll_most.get());
             }
             Action::Home => self.scroll = 0,
             _ => {}
@@ -241,8 +253,8 @@ impl TankView {
             }
         };
         let status = journalled_status(&done);
-        let result = result_draft(&done, p.got.clone());
-        self.from = p.got;
+        let result = result_draft(&done, p.got);
+        self.journalled = Some((done.tank_id.clone(), done.inputs));
         self.shown = Some(Ok(done));
         self.scroll = 0;
         self.message = None;
@@ -350,10 +362,7 @@ impl View for TankView {
     }
 
     fn refresh(&mut self, ctx: &Ctx) {
-        // A journalled answer stays on screen until the picks or the readings move on.
-        if self.pending.is_none() {
-            self.work_out(ctx);
-        }
+        self.work_out(ctx);
     }
 
     fn answer(&mut self, record: &Record, ctx: &Ctx) -> Vec<Effect> {
@@ -377,11 +386,12 @@ impl View for TankView {
             form: &self.form,
             tank: self.target(ctx),
             shown: self.shown.as_ref(),
-            journalled: !self.from.is_empty(),
+            journalled: self.shows_journalled(),
             waiting: self.pending.is_some(),
             message: self.message.as_deref(),
             scroll: self.scroll,
             scroll_most: &self.scroll_most,
+            page: &self.page,
         };
         screen.draw(frame, area, ctx);
     }

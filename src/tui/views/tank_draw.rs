@@ -43,6 +43,8 @@ pub struct TankScreen<'a> {
     pub scroll: u16,
     /// Where the furthest scroll is written back for the view's PgDn.
     pub scroll_most: &'a Cell<u16>,
+    /// Where the panel's page size is written back.
+    pub page: &'a Cell<u16>,
 }
 
 impl TankScreen<'_> {
@@ -298,6 +300,7 @@ impl TankScreen<'_> {
         // Scrolled no further than the last line at the bottom of the panel.
         let most = u16::try_from(rows.saturating_sub(usize::from(inner.height))).unwrap_or(0);
         self.scroll_most.set(most);
+        self.page.set(inner.height.saturating_sub(1).max(1));
         let look = |heading: bool| match (heading, &self.shown) {
             (true, _) => t.title,
             (false, Some(Err(_))) => t.warn,
