@@ -171,6 +171,7 @@ fn the_sauce_pumps_duty_point_sits_on_its_corrected_curve_and_the_line() {
     let s = screen(&a);
     assert!(s.contains("Pump P-1 (centrifugal)"), "{s}");
     assert!(s.contains('◆') && s.contains("+ pump"), "{s}");
+    insta::assert_snapshot!("line_pump_80x24", s);
 }
 
 /// The product's nominal model at its reference temperature, as the view uses it with no
@@ -210,6 +211,9 @@ fn the_text_panel_scrolls_to_its_last_caution_at_80x24() {
     assert!(seen, "{}", screen(&a));
     press(&mut a, KeyCode::Home);
     assert!(screen(&a).contains("L-2  filler-paste"));
+    // End goes straight to the last line.
+    press(&mut a, KeyCode::End);
+    assert!(screen(&a).contains("Pump: shaft power counts no"));
 }
 
 // Plant readings on L-2, the static head of Δz = 2 m kept and the friction part made 30 %

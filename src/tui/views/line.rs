@@ -279,6 +279,10 @@ impl View for LineView {
                 self.scroll = 0;
                 return Vec::new();
             }
+            Action::End => {
+                self.scroll = self.scroll_most.get();
+                return Vec::new();
+            }
             _ => return Vec::new(),
         }
         self.work_out(ctx);

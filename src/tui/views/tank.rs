@@ -192,6 +192,7 @@ impl TankView {
                 self.scroll = to.min(self.scroll_most.get());
             }
             Action::Home => self.scroll = 0,
+            Action::End => self.scroll = self.scroll_most.get(),
             _ => {}
         }
         Vec::new()
