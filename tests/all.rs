@@ -47,5 +47,6 @@ mod tui_line;
 mod tui_render;
 mod tui_restart;
 mod tui_spot;
+mod tui_tank;
 mod units;
 mod units_plant;

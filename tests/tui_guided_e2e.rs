@@ -23,8 +23,9 @@ fn the_pump_will_not_start_check_ends_on_its_findings() {
     s.wait_for("* L-2");
     s.send("\x1b[B\r");
     s.wait_for("* filler-paste");
-    // Tab through Readings, Flow curve, Line and Restart to Checks; Enter starts the first.
-    s.send("\t\t\t\t\t");
+    // Tab through Readings, Spot, Flow curve, Line, Restart and Tank to Checks; Enter starts
+    // the first.
+    s.send("\t\t\t\t\t\t\t");
     s.wait_for_all(&["Guided checks", "On: line L-2, pump P-2"]);
     s.send("\r");
     s.wait_for_all(&["Step 1 of 3", "Read at: L-2"]);

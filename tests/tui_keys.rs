@@ -207,6 +207,7 @@ fn tab_and_shift_tab_walk_the_views() {
             views::curve::ID,
             views::line::ID,
             views::restart::ID,
+            views::tank::ID,
             views::guided::ID,
             views::findings::ID,
             views::journal::ID,

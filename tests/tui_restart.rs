@@ -232,3 +232,19 @@ fn restart_view_in_ascii_is_all_ascii() {
     assert!(odd.is_empty(), "not ASCII: {odd:?}\n{s}");
     insta::assert_snapshot!("restart_ascii_80x24", s);
 }
+
+#[test]
+fn the_answer_scrolls_no_further_than_its_last_line() {
+    let mut a = on_restart_view(Glyphs::Unicode);
+    enter_and_save(&mut a);
+    // Each key followed by a frame, as in the app: far past the end, then one page back.
+    for _ in 0..30 {
+        press(&mut a, KeyCode::PageDown);
+        screen(&a);
+    }
+    let end = screen(&a);
+    press(&mut a, KeyCode::PageDown);
+    assert_eq!(screen(&a), end);
+    press(&mut a, KeyCode::PageUp);
+    assert_ne!(screen(&a), end, "PgUp at the end moves at once");
+}

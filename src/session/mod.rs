@@ -35,6 +35,7 @@ pub mod state;
 pub mod tank;
 pub mod tank_input;
 pub mod tank_json;
+pub mod tank_live;
 mod tank_motor;
 mod tank_readings;
 pub mod tank_words;

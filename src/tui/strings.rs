@@ -28,6 +28,7 @@ pub mod views {
     pub const JOURNAL: &str = "Journal";
     pub const RESTART: &str = "Restart";
     pub const LINE: &str = "Line";
+    pub const TANK: &str = "Tank";
 }
 
 /// One line per view: what to watch out for before acting on what it shows.
@@ -45,6 +46,8 @@ pub mod caution {
         "Never raise a relief setting to force a restart; isolate and lock out first.";
     pub const LINE: &str =
         "Never exceed the rated pressure of the weakest part; lock out before opening.";
+    pub const TANK: &str =
+        "Stop and lock out the agitator before sampling or looking in; hot product.";
 }
 
 /// Labels of the key map (footer and help).
@@ -362,6 +365,12 @@ pub mod line {
     pub const DESIGN: &str = "design";
     pub const CAUTIONS: &str = "Cautions";
     pub const SOURCE: &str = "Curve";
+    pub const SCROLL: &str = "PgUp/PgDn";
+    pub const LEGEND_PUMP: &str = "pump";
+    pub const LEGEND_DUTY: &str = "duty";
+    pub const RELIEF: &str = "relief";
+    pub const NO_PUMP: &str = "No pump feeds this line in the site config.";
+    pub const NO_PUMP_ANSWER: &str = "No pump answer";
 }
 
 /// Journal view.
@@ -493,4 +502,63 @@ mod tests {
             assert!(l.chars().count() <= 80, "{} chars: {l}", l.chars().count());
         }
     }
+}
+
+/// Tank view.
+pub mod tank {
+    pub const FORM_TITLE: &str = " Tank readings ";
+    pub const TANK: &str = "Tank";
+    pub const PRODUCT: &str = "Product";
+    pub const NO_TANK: &str = "no tank in the site config";
+    pub const SPEED: &str = "Speed";
+    pub const CURRENT: &str = "Current";
+    pub const VOLTAGE: &str = "Voltage";
+    pub const TEMPERATURE: &str = "Temp";
+    pub const SAVE: &str = "[ Save readings ]";
+    pub const HINT: &str = "Blank: the last reading or the site's. Ctrl-S saves; Esc leaves.";
+    pub const CHART_TITLE: &str = " Power number vs Reynolds (log) ";
+    pub const LEGEND_CURVE: &str = "curve";
+    pub const LEGEND_TODAY: &str = "today";
+    pub const ANSWER_TITLE: &str = " Tank answer ";
+    pub const SIDE_TITLE: &str = " Side view ";
+    pub const SCROLL: &str = "PgUp/PgDn";
+    pub const NEED_READING: &str = "Nothing typed: type at least one reading to save.";
+    pub const NEGATIVE: &str = "cannot be negative";
+    pub const CANNOT_ANSWER: &str = "Not saved";
+    pub const SENT: &str = "Tank readings sent to the journal; the answer follows once saved.";
+    pub const ANSWER_FOR: &str = "Answer for";
+    pub const JOURNALLED: &str = "journalled";
+    pub const FORM_NAME: &str = "The tank readings form";
+    pub const AT: &str = "at";
+    pub const FROM_READING: &str = "read today";
+    pub const FROM_SITE: &str = "the site's speed";
+    pub const REGIME: &str = "Regime";
+    pub const POWER: &str = "Power";
+    pub const TORQUE: &str = "Torque";
+    pub const PER_VOLUME: &str = "Power per volume";
+    pub const MOTOR: &str = "Motor";
+    pub const GEARBOX: &str = "Gearbox";
+    pub const OF_RATING: &str = "of its";
+    pub const OF_LIMITS: &str = "of their limits";
+    pub const RATING: &str = "rating";
+    pub const TORQUE_LIMIT: &str = "torque limit";
+    pub const NO_MOTOR_READING: &str =
+        "No motor reading yet: type the motor current to see the viscosity it implies.";
+    pub const SHAFT: &str = "Shaft power from the motor";
+    pub const VISC_MOTOR: &str = "Viscosity from the motor";
+    pub const VISC_METER: &str = "Viscometer's";
+    pub const REFUSED_SEE_FINDINGS: &str = "No viscosity read back from it (why: Findings).";
+    pub const CAVERN: &str = "Cavern";
+    pub const ACROSS: &str = "across";
+    pub const IN_TANK: &str = "in a tank of";
+    pub const TO_WALL: &str = "reaches the wall from about";
+    pub const NO_CAVERN: &str = "No yield stress: the whole tank moves (no cavern).";
+    pub const FINDINGS: &str = "Findings";
+    pub const CAUTIONS: &str = "Cautions";
+    pub const CURVE: &str = "Curve";
+    pub const NO_UPPER: &str = "no upper bound";
+    pub const LEGEND_CAVERN: &str = "moving";
+    pub const LEGEND_STILL: &str = "still";
+    pub const JOURNALLED_NOTE: &str =
+        "This answer is journalled as a tank result linked to the readings.";
 }

@@ -8,6 +8,7 @@
 //! after a what-if key, from the state and the site; drawing reads the cache only.
 
 use super::line_draw;
+use super::line_pump::{PumpShown, pump_on_line};
 use super::{Effect, View, ViewId};
 use crate::line::{CurvePoint, PlantPair, Regime};
 use crate::session::line::{LineCase, PlantCheck, plant_check, site_case, system_curve};
@@ -20,6 +21,7 @@ use crate::tui::strings::line as s;
 use crate::tui::strings::{caution, views as names};
 use ratatui::Frame;
 use ratatui::layout::Rect;
+use std::cell::Cell;
 
 /// This view's id.
 pub const ID: ViewId = ViewId("line");
@@ -52,6 +54,8 @@ pub struct LineShown {
     pub pairs: Vec<PlantPair>,
     pub check: Option<PlantCheck>,
     pub cautions: Vec<&'static str>,
+    /// The pump that feeds the line, on it (`None` when no pump feeds it).
+    pub pump: Option<Result<PumpShown, String>>,
 }
 
 #[derive(Default)]
@@ -59,15 +63,29 @@ pub struct LineView {
     cooler_steps: u32,
     thicker_steps: u32,
     shown: Option<Result<LineShown, String>>,
+    /// The text panel's scroll, and how far it can go as last drawn.
+    scroll: u16,
+    scroll_most: Cell<u16>,
+    /// Rows of the text panel as last drawn: PgUp/PgDn move by this less one.
+    page: Cell<u16>,
 }
 
 impl LineView {
     pub fn new(_ctx: &Ctx) -> LineView {
-        LineView::default()
+        LineView {
+            scroll_most: Cell::new(u16::MAX),
+            page: Cell::new(4),
+            ..LineView::default()
+        }
     }
 
     pub fn shown(&self) -> Option<&Result<LineShown, String>> {
         self.shown.as_ref()
+    }
+
+    /// The answer worked out, taken out of the view (for tests).
+    pub fn into_shown(self) -> Option<Result<LineShown, String>> {
+        self.shown
     }
 
     fn work_out(&mut self, ctx: &Ctx) {
@@ -164,9 +182,11 @@ fn shown_for(
     let thick = 1.0 + THICKER_STEP * f64::from(thicker);
     source.model = scale_viscosity(source.model, thick);
     let words = source.describe();
+    let model = source.model;
     let case: LineCase = site_case(site, line_id, source, None)?;
     let pairs = plant_pairs(state, line_id);
-    let top = top_flow(&case, &pairs);
+    let pump = pump_on_line(site, line_id, product, model);
+    let top = top_flow(&case, &pairs).max(pump_top(pump.as_ref()));
     let curve = system_curve(&case, top / CURVE_POINTS as f64, top, CURVE_POINTS)?;
     let check = (!pairs.is_empty())
         .then(|| plant_check(&case, &pairs).ok())
@@ -187,7 +207,17 @@ fn shown_for(
         pairs,
         check,
         cautions,
+        pump,
     })
+}
+
+/// The curve runs past the pump's duty point and to the end of its curve.
+fn pump_top(pump: Option<&Result<PumpShown, String>>) -> f64 {
+    let Some(Ok(p)) = pump else {
+        return 0.0;
+    };
+    let duty = p.duty.map_or(0.0, |(q, _)| q * 1.2);
+    p.curve.iter().map(|c| c.0).fold(duty, f64::max)
 }
 
 /// The curve's top flow: past the plant readings, else a brisk velocity in the line.
@@ -236,6 +266,23 @@ impl View for LineView {
                 self.cooler_steps = 0;
                 self.thicker_steps = 0;
             }
+            Action::PageUp => {
+                self.scroll = self.scroll.saturating_sub(self.page.get());
+                return Vec::new();
+            }
+            Action::PageDown => {
+                let to = self.scroll.saturating_add(self.page.get());
+                self.scroll = to.min(self.scroll_most.get());
+                return Vec::new();
+            }
+            Action::Home => {
+                self.scroll = 0;
+                return Vec::new();
+            }
+            Action::End => {
+                self.scroll = self.scroll_most.get();
+                return Vec::new();
+            }
             _ => return Vec::new(),
         }
         self.work_out(ctx);
@@ -255,6 +302,9 @@ impl View for LineView {
                 shown: self.shown.as_ref(),
                 cooler_k: COOLER_STEP_K * f64::from(self.cooler_steps),
                 thicker: THICKER_STEP * f64::from(self.thicker_steps),
+                scroll: self.scroll,
+                scroll_most: &self.scroll_most,
+                page: &self.page,
             },
         );
     }

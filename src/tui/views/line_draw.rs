@@ -3,6 +3,8 @@
 //! right.
 
 use super::line::{LineShown, regime_runs};
+use super::line_pump;
+use super::text_rows::wrapped_rows;
 use crate::line::Regime;
 use crate::present::Style;
 use crate::session::line_words::pressure_with_band;
@@ -16,6 +18,7 @@ use ratatui::Frame;
 use ratatui::layout::{Constraint, Layout, Rect};
 use ratatui::text::Line;
 use ratatui::widgets::{Paragraph, Wrap};
+use std::cell::Cell;
 
 const PANEL_W: u16 = 38;
 
@@ -23,6 +26,10 @@ pub struct LineScreen<'a> {
     pub shown: Option<&'a Result<LineShown, String>>,
     pub cooler_k: f64,
     pub thicker: f64,
+    /// The text panel's scroll; how far it can go is written back for the view's PgDn.
+    pub scroll: u16,
+    pub scroll_most: &'a Cell<u16>,
+    pub page: &'a Cell<u16>,
 }
 
 pub fn draw(frame: &mut Frame, area: Rect, ctx: &Ctx, screen: LineScreen) {
@@ -57,6 +64,16 @@ pub fn draw(frame: &mut Frame, area: Rect, ctx: &Ctx, screen: LineScreen) {
     };
     draw_chart(frame, left, sh, ctx);
     let lines = words(sh, &screen, ctx.style());
+    let block = t.panel(format!("{}({}) ", s::PANEL_TITLE, s::SCROLL));
+    let inner = block.inner(right);
+    let rows: usize = lines
+        .iter()
+        .map(|(_, l)| wrapped_rows(l, usize::from(inner.width)))
+        .sum();
+    // Scrolled no further than the last line at the bottom of the panel.
+    let most = u16::try_from(rows.saturating_sub(usize::from(inner.height))).unwrap_or(0);
+    screen.scroll_most.set(most);
+    screen.page.set(inner.height.saturating_sub(1).max(1));
     let styled: Vec<Line> = lines
         .into_iter()
         .map(|(title, text)| match title {
@@ -67,7 +84,8 @@ pub fn draw(frame: &mut Frame, area: Rect, ctx: &Ctx, screen: LineScreen) {
     frame.render_widget(
         Paragraph::new(styled)
             .wrap(Wrap { trim: false })
-            .block(t.panel(s::PANEL_TITLE)),
+            .scroll((screen.scroll.min(most), 0))
+            .block(block),
         right,
     );
 }
@@ -101,6 +119,13 @@ fn words(sh: &LineShown, screen: &LineScreen, style: Style) -> Vec<(bool, String
         )
     };
     out.push((false, say(format!("{}: {what_if}", s::WHAT_IF))));
+    // The pump on the line first: its duty point is what an operator acts on.
+    let (pump, notes) = match &sh.pump {
+        Some(Ok(p)) => line_pump::words(p, sys),
+        Some(Err(e)) => (vec![format!("{}: {e}", s::NO_PUMP_ANSWER)], Vec::new()),
+        None => (vec![s::NO_PUMP.to_string()], Vec::new()),
+    };
+    out.extend(pump.into_iter().map(|l| (false, say(l))));
     if let Some(p) = sh.curve.last() {
         out.push((
             false,
@@ -125,6 +150,8 @@ fn words(sh: &LineShown, screen: &LineScreen, style: Style) -> Vec<(bool, String
     out.push((false, say(format!("{}: {plant}", s::PLANT))));
     out.push((true, format!("{}:", s::CAUTIONS)));
     out.extend(sh.cautions.iter().map(|c| (false, say(format!("- {c}")))));
+    // The pump's notes after the cautions: they qualify its answer, above.
+    out.extend(notes.into_iter().map(|n| (false, say(n))));
     out
 }
 
@@ -134,6 +161,9 @@ struct Glyph {
     turbulent: char,
     plant: char,
     design: char,
+    pump: char,
+    duty: char,
+    relief: char,
 }
 
 fn glyphs(g: Glyphs) -> Glyph {
@@ -144,6 +174,9 @@ fn glyphs(g: Glyphs) -> Glyph {
             turbulent: '*',
             plant: '●',
             design: '━',
+            pump: '+',
+            duty: '◆',
+            relief: '╌',
         },
         Glyphs::Ascii => Glyph {
             band: ':',
@@ -151,6 +184,9 @@ fn glyphs(g: Glyphs) -> Glyph {
             turbulent: '*',
             plant: 'o',
             design: '=',
+            pump: '+',
+            duty: 'X',
+            relief: '-',
         },
     }
 }
@@ -181,6 +217,15 @@ fn draw_chart(frame: &mut Frame, area: Rect, sh: &LineShown, ctx: &Ctx) {
         .iter()
         .map(|p| (xq(p.flow_m3_s), yp(p.pressure_drop_pa)))
         .collect();
+    let pump = sh.pump.as_ref().and_then(|p| p.as_ref().ok());
+    let pump_curve: Vec<(f64, f64)> = pump
+        .map(|p| p.curve.iter().map(|&(q, pa)| (xq(q), yp(pa))).collect())
+        .unwrap_or_default();
+    let duty: Vec<(f64, f64)> = pump
+        .and_then(|p| p.duty)
+        .map(|(q, pa)| (xq(q), yp(pa)))
+        .into_iter()
+        .collect();
     let (lam, tra, tur) = (
         by(Regime::Laminar),
         by(Regime::Transitional),
@@ -208,11 +253,22 @@ fn draw_chart(frame: &mut Frame, area: Rect, sh: &LineShown, ctx: &Ctx) {
             style: t.chart_fit,
         },
         Series {
+            points: &pump_curve,
+            glyph: g.pump,
+            style: t.key,
+        },
+        Series {
             points: &plant,
             glyph: g.plant,
             style: t.chart_point,
         },
+        Series {
+            points: &duty,
+            glyph: g.duty,
+            style: t.warn,
+        },
     ];
+    let relief = pump.and_then(|p| p.relief_pa);
     let levels: Vec<Level> = sh
         .design_pa
         .map(|d| Level {
@@ -222,19 +278,32 @@ fn draw_chart(frame: &mut Frame, area: Rect, sh: &LineShown, ctx: &Ctx) {
             label: s::DESIGN,
         })
         .into_iter()
+        .chain(relief.map(|r| Level {
+            y: yp(r),
+            glyph: g.relief,
+            style: t.warn,
+            label: s::RELIEF,
+        }))
         .collect();
     let ys = lam
         .iter()
         .chain(&tra)
         .chain(&tur)
         .chain(&plant)
+        .chain(&pump_curve)
+        .chain(&duty)
         .map(|p| p.1)
-        // The design pressure is in range, so the headroom to it shows.
-        .chain(sh.design_pa.map(yp));
-    let xs = sh.curve.iter().map(|p| xq(p.answer.flow_m3_s));
+        // The design pressure and the relief are in range, so the headroom to them shows.
+        .chain(sh.design_pa.map(yp))
+        .chain(relief.map(yp));
+    let xs = sh
+        .curve
+        .iter()
+        .map(|p| xq(p.answer.flow_m3_s))
+        .chain(pump_curve.iter().chain(&duty).map(|p| p.0));
     let fallback = LinRange { lo: 0.0, hi: 1.0 };
-    let legend = format!(
-        " {} {}  {} {}  {} {} ",
+    let mut legend = format!(
+        " {} {} {} {} {} {} ",
         t.marks.fit,
         s::LEGEND_CURVE,
         g.band,
@@ -242,6 +311,12 @@ fn draw_chart(frame: &mut Frame, area: Rect, sh: &LineShown, ctx: &Ctx) {
         g.plant,
         s::LEGEND_PLANT
     );
+    if !pump_curve.is_empty() {
+        legend.push_str(&format!("{} {} ", g.pump, s::LEGEND_PUMP));
+    }
+    if !duty.is_empty() {
+        legend.push_str(&format!("{} {} ", g.duty, s::LEGEND_DUTY));
+    }
     let block = t
         .panel(s::CHART_TITLE)
         .title_bottom(Line::styled(legend, t.dim));

@@ -6,10 +6,16 @@ mod curve_panel;
 mod findings_draw;
 mod guided_draw;
 mod line_draw;
+pub mod line_pump;
 mod readings_draw;
 mod readings_form;
 mod restart_draw;
 pub mod restart_form;
+mod tank_draw;
+pub mod tank_form;
+mod tank_sketch;
+mod tank_text;
+mod text_rows;
 
 use super::ctx::Ctx;
 use super::keymap::{Action, Binding};
@@ -102,6 +108,7 @@ views! {
     curve::CurveView,
     line::LineView,
     restart::RestartView,
+    tank::TankView,
     guided::GuidedView,
     findings::FindingsView,
     journal::JournalView,

@@ -92,6 +92,8 @@ pub struct RestartView {
     /// The message under the form (a refusal, or what just happened).
     message: Option<String>,
     scroll: u16,
+    /// How far the answer can scroll, as last drawn (PgDn stops there).
+    scroll_most: std::cell::Cell<u16>,
 }
 
 /// The line and pump the view is about: picked here, else the Site view's pick (a line,
@@ -135,6 +137,7 @@ impl RestartView {
             shown: None,
             message: None,
             scroll: 0,
+            scroll_most: std::cell::Cell::new(u16::MAX),
         }
     }
 
@@ -212,7 +215,9 @@ impl RestartView {
             Action::Activate => self.form.down(),
             Action::Save => return self.save(ctx),
             Action::PageUp => self.scroll = self.scroll.saturating_sub(4),
-            Action::PageDown => self.scroll = self.scroll.saturating_add(4),
+            Action::PageDown => {
+                self.scroll = self.scroll.saturating_add(4).min(self.scroll_most.get());
+            }
             Action::Home => self.scroll = 0,
             _ => {}
         }
@@ -479,6 +484,7 @@ impl View for RestartView {
             waiting: self.pending.is_some(),
             message: self.message.as_deref(),
             scroll: self.scroll,
+            scroll_most: &self.scroll_most,
         };
         screen.draw(frame, area, ctx);
     }

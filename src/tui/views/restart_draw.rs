@@ -40,6 +40,8 @@ pub struct RestartScreen<'a> {
     pub waiting: bool,
     pub message: Option<&'a str>,
     pub scroll: u16,
+    /// Where the furthest scroll is written back for the view's PgDn.
+    pub scroll_most: &'a std::cell::Cell<u16>,
 }
 
 impl RestartScreen<'_> {
@@ -262,9 +264,12 @@ impl RestartScreen<'_> {
             None if self.waiting => vec![Line::styled(s::WAITING, t.dim)],
             None => vec![Line::styled(s::NO_ANSWER, t.dim)],
         };
-        let para = Paragraph::new(lines)
-            .wrap(Wrap { trim: false })
-            .scroll((self.scroll, 0));
+        let para = Paragraph::new(lines).wrap(Wrap { trim: false });
+        // Scrolled no further than the last line at the bottom of the panel.
+        let rows = para.line_count(inner.width);
+        let most = u16::try_from(rows.saturating_sub(usize::from(inner.height))).unwrap_or(0);
+        self.scroll_most.set(most);
+        let para = para.scroll((self.scroll.min(most), 0));
         frame.render_widget(para, inner);
     }
 }
