@@ -75,6 +75,10 @@ fn the_html_parses_and_holds_every_chart() {
         "Set 2: chilli-sauce on VIS-A",
         "Gel build-up: line L-2",
         "Power curve: tank TK-1",
+        // P-2 feeds L-2: the line's pressure drop with the pump on it.
+        "Line L-2: chilli-sauce",
+        // The sauce has limits on K, n and the apparent viscosity (demo site).
+        "Trend of chilli-sauce: K",
     ] {
         assert!(
             titles.iter().any(|t| t.starts_with(wanted)),

@@ -17,6 +17,8 @@ pub mod flow_curve;
 pub mod guided;
 pub mod line;
 pub mod line_plant;
+pub mod line_pump;
+pub mod line_shown;
 pub mod line_words;
 pub mod off_scale;
 mod points;

@@ -45,6 +45,7 @@ pub(crate) fn render(inputs: &Inputs) -> String {
     for j in &inputs.journals {
         out.push_str(&session(site, j));
     }
+    out.push_str(&super::html_more::trend_charts(&inputs.journals, site));
     if !inputs.failed.is_empty() {
         out.push_str("<h2>Journals left out</h2>\n<ul>\n");
         for f in &inputs.failed {
@@ -122,6 +123,7 @@ fn session(site: &Site, j: &Journal) -> String {
     for e in &s.sets {
         out.push_str(&set_chart(e));
     }
+    out.push_str(&super::html_more::line_charts(&j.state, site));
     out.push_str(&restart_charts(&j.state, site));
     out.push_str(&tank_charts(&j.state, site));
     out.push_str(&notes(j));

@@ -11,7 +11,7 @@ use std::fmt::Write as _;
 /// Points on a drawn curve.
 const CURVE_POINTS: usize = 48;
 
-fn figure(svg: String, caption: &str) -> String {
+pub(crate) fn figure(svg: String, caption: &str) -> String {
     format!(
         "<figure>\n{svg}<figcaption>{}</figcaption>\n</figure>\n",
         escape(caption)

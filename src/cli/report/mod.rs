@@ -8,6 +8,7 @@
 mod csv;
 mod html;
 mod html_charts;
+mod html_more;
 mod json;
 mod md;
 mod md_set;

@@ -2,11 +2,11 @@
 //! by regime, the plant's points, the line's design pressure), the answer in words on the
 //! right.
 
-use super::line::{LineShown, regime_runs};
-use super::line_pump;
 use super::text_rows::wrapped_rows;
 use crate::line::Regime;
 use crate::present::Style;
+use crate::session::line_pump;
+use crate::session::line_shown::{LineShown, regime_runs};
 use crate::session::line_words::pressure_with_band;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;

@@ -6,7 +6,6 @@ mod curve_panel;
 mod findings_draw;
 mod guided_draw;
 mod line_draw;
-pub mod line_pump;
 mod readings_draw;
 mod readings_form;
 mod restart_draw;

@@ -1,4 +1,4 @@
-//! The pump on the Line view: the pump that feeds the line, answered on it with the same
+//! The pump on a line, for the Line view and the report's chart: the pump that feeds the line, answered on it with the same
 //! curve the line uses (session::pump — ANSI/HI 9.6.7 for a centrifugal pump, delivered flow
 //! and slip for a positive-displacement one, duty points through session::line), as points
 //! for the chart and lines of words.
