@@ -1,6 +1,7 @@
 //! Terminal UI costs: the first frame (app built on the demo site, drawn once at 80×24),
 //! one typed digit (time, and bytes on the wire through the real crossterm backend), a
-//! full redraw at 200×60, and process start to first frame in a pseudo-terminal.
+//! full redraw at 200×60 of the Flow curve, Line and Tank views, and process start to first
+//! frame in a pseudo-terminal.
 //! Run with `cargo bench --bench tui`. Readings are invented (an HB-like sauce).
 
 #[path = "../tests/support/tui.rs"]
@@ -9,7 +10,7 @@ mod support;
 use divan::{Bencher, black_box};
 use portable_pty::CommandBuilder;
 use ratatui::backend::{CrosstermBackend, TestBackend};
-use ratatui::crossterm::event::{KeyCode, KeyEvent};
+use ratatui::crossterm::event::{KeyCode, KeyEvent, KeyModifiers};
 use ratatui::layout::Rect;
 use ratatui::{Terminal, TerminalOptions, Viewport};
 use rheoside::tui::app::App;
@@ -22,10 +23,9 @@ use std::sync::{Arc, Mutex};
 use std::time::{Duration, Instant};
 
 fn main() {
-    eprintln!(
-        "bytes for one digit typed into a dial field: {}",
-        digit_bytes()
-    );
+    let (full, digit) = digit_bytes();
+    eprintln!("bytes for a full 80x24 frame of the Readings form: {full}");
+    eprintln!("bytes for one digit typed into a dial field: {digit}");
     divan::main();
 }
 
@@ -49,18 +49,61 @@ fn keys(app: &mut App, text: &str) {
     }
 }
 
-/// The readings form with the picks made and the first dial being typed into.
+/// The readings form with the picks made and the first dial being typed into ("1": below
+/// 10 % of scale, so the next digit changes no check and only the digit, the row's stress
+/// and the cursor are sent; the same case as the render test's byte count).
 fn typing_app() -> App {
     let mut a = app();
-    keys(&mut a, "\r\r\t5");
+    keys(&mut a, "\r\r\t1");
     a
 }
 
-/// A saved set on the Flow curve view: the busiest screen.
+/// A saved set on the Flow curve view: the busiest screen. Ctrl-S saves (a bare `s` types).
 fn curve_app() -> App {
     let mut a = app();
-    keys(&mut a, "\r\r\t110\r76\r61.5\r44\r16\r14\rs");
+    keys(&mut a, "\r\r\t110\r76\r61.5\r44\r16\r14\r");
+    a.on_key(&KeyEvent::new(KeyCode::Char('s'), KeyModifiers::CONTROL));
+    support::journal_answers(&mut a, true);
     a
+}
+
+/// The demo app with `downs` Down presses then Enter on the Site list (equipment), Down and
+/// Enter on the product, then Tab until the view `id` is active.
+fn app_on_view(downs: usize, id: rheoside::tui::views::ViewId) -> App {
+    let mut a = app();
+    for _ in 0..downs {
+        a.on_key(&KeyEvent::from(KeyCode::Down));
+    }
+    keys(&mut a, "\r");
+    a.on_key(&KeyEvent::from(KeyCode::Down));
+    keys(&mut a, "\r");
+    for _ in 0..a.views().len() {
+        if a.active_id() == id {
+            break;
+        }
+        keys(&mut a, "\t");
+    }
+    a
+}
+
+fn redraw_200x60(bencher: Bencher, a: &App) {
+    let mut t = Terminal::new(TestBackend::new(200, 60)).expect("a test terminal");
+    bencher.bench_local(|| {
+        t.clear().expect("clearing");
+        t.draw(|f| render::draw(black_box(a), f)).expect("drawing");
+    });
+}
+
+/// The Line view on the paste line L-2 with filler-paste: curve, band, pump and words.
+#[divan::bench]
+fn line_view_redraw_200x60(bencher: Bencher) {
+    redraw_200x60(bencher, &app_on_view(3, rheoside::tui::views::line::ID));
+}
+
+/// The Tank view on TK-1: power curve, side view and the answer.
+#[divan::bench]
+fn tank_view_redraw_200x60(bencher: Bencher) {
+    redraw_200x60(bencher, &app_on_view(0, rheoside::tui::views::tank::ID));
 }
 
 #[divan::bench]
@@ -95,8 +138,9 @@ fn typed_digit_80x24(bencher: Bencher) {
     });
 }
 
-/// Bytes the crossterm backend writes for the frame after one more digit.
-fn digit_bytes() -> usize {
+/// Bytes the crossterm backend writes for a whole first frame, and for the frame after one
+/// more digit.
+fn digit_bytes() -> (usize, usize) {
     let mut a = typing_app();
     let counter = support::Counter::default();
     let options = TerminalOptions {
@@ -104,13 +148,13 @@ fn digit_bytes() -> usize {
     };
     let backend = CrosstermBackend::new(counter.clone());
     let Ok(mut t) = Terminal::with_options(backend, options) else {
-        return 0;
+        return (0, 0);
     };
     let _ = t.draw(|f| render::draw(&a, f));
-    counter.0.store(0, Ordering::Relaxed);
+    let full = counter.0.swap(0, Ordering::Relaxed);
     keys(&mut a, "2");
     let _ = t.draw(|f| render::draw(&a, f));
-    counter.0.load(Ordering::Relaxed)
+    (full, counter.0.load(Ordering::Relaxed))
 }
 
 /// A started program; stopping it (SIGHUP, up to 250 ms until portable-pty's SIGKILL) and
