@@ -383,3 +383,52 @@ fn an_unknown_format_is_refused_with_the_accepted_ones() {
     assert_eq!(out.status.code(), Some(2));
     assert!(String::from_utf8_lossy(&out.stderr).contains("md, csv, json or html"));
 }
+
+// Fault drill, hostile text: a journal edited by hand (not through our writer, which cleans
+// notes) carries a terminal escape, a spreadsheet formula and markup in a note and in the
+// operator's name. No report format may pass the escape through raw; a CSV cell that a
+// spreadsheet would run as a formula starts with a quote; the HTML escapes the markup.
+#[test]
+fn hostile_journal_text_never_reaches_a_report_raw() {
+    let dir = tempfile::tempdir().unwrap();
+    let mut w = writer(dir.path(), "night");
+    w.append(None, Payload::Note { text: "ok".into() }).unwrap();
+    let path = w.path().expect("file journal").to_path_buf();
+    drop(w);
+    let mut loaded = load(&path).expect("journal reads");
+    let mut note = loaded.records.pop().expect("the note");
+    note.seq += 1;
+    note.operator = "=cmd|' /C calc'!A0".into();
+    note.payload = Payload::Note {
+        text: "=HYPERLINK(\"http://x\") \u{1b}[2J\u{1b}]0;owned\u{7} <b>bold</b>".into(),
+    };
+    let mut read = note.clone();
+    read.seq += 1;
+    read.equipment = Some("@SUM(A1)\u{1b}[31m".into());
+    read.payload = reading("flow=3 m3/h");
+    if let Payload::Reading { raw, .. } = &mut read.payload {
+        raw.push_str(" \u{1b}[2J=1+1");
+    }
+    let mut text = std::fs::read_to_string(&path).unwrap();
+    for r in [&note, &read] {
+        text.push_str(&serde_json::to_string(r).expect("encodes"));
+        text.push('\n');
+    }
+    std::fs::write(&path, text).unwrap();
+    let p = path.to_str().unwrap();
+    for format in ["md", "csv", "html"] {
+        let out = stdout(&report(&[p, "--format", format]));
+        assert!(
+            !out.contains('\u{1b}') && !out.contains('\u{7}'),
+            "{format}: {out}"
+        );
+        assert!(out.contains("calc"), "{format} dropped the operator: {out}");
+    }
+    let csv = stdout(&report(&[p, "--format", "csv"]));
+    for cell in csv.lines().flat_map(|l| l.split(',')) {
+        let cell = cell.trim_start_matches('"');
+        assert!(!cell.starts_with('='), "a formula cell: {cell}");
+    }
+    let html = stdout(&report(&[p, "--format", "html"]));
+    assert!(!html.contains("<b>bold") && html.contains("&lt;b&gt;bold"));
+}

@@ -30,17 +30,20 @@ pub(crate) struct Session {
 
 impl Session {
     pub(crate) fn start(args: &[&str]) -> Session {
-        Session::start_on(args, "xterm-256color")
+        Session::start_on(args, "xterm-256color", &[])
     }
 
-    /// The binary on a terminal of this TERM.
-    fn start_on(args: &[&str], term: &str) -> Session {
+    /// The binary on a terminal of this TERM, with extra environment variables.
+    fn start_on(args: &[&str], term: &str, env: &[(&str, &str)]) -> Session {
         let pty = support::pty_80x24();
         let mut cmd = CommandBuilder::new(assert_cmd::cargo::cargo_bin("rheoside"));
         cmd.args(args);
         cmd.env("TERM", term);
         cmd.env_remove("NO_COLOR");
         cmd.env_remove("RHEOSIDE_LOG_DIR");
+        for (k, v) in env {
+            cmd.env(k, v);
+        }
         let child = pty.slave.spawn_command(cmd).expect("the binary starts");
         drop(pty.slave);
         let mut reader = pty.master.try_clone_reader().expect("a pty reader");
@@ -317,7 +320,7 @@ fn every_letter_typed_on_the_readings_form_is_text() {
 fn a_dumb_terminal_gets_an_ascii_screen() {
     let logs = tempfile::tempdir().expect("a temp dir");
     let log_dir = logs.path().to_str().expect("a UTF-8 path");
-    let mut s = Session::start_on(&["--log-dir", log_dir, "--operator", "e2e"], "dumb");
+    let mut s = Session::start_on(&["--log-dir", log_dir, "--operator", "e2e"], "dumb", &[]);
     s.wait_for("Sample point (equipment)");
     s.send("\r");
     s.wait_for("* TK-1");
@@ -357,6 +360,32 @@ fn stopped_by(signal: &str) {
     let journal = load(&journal_in(logs.path())).expect("the journal reads back");
     let kinds: Vec<&str> = journal.records.iter().map(|r| r.payload.kind()).collect();
     assert_eq!(kinds, ["session-start", "note", "session-end"]);
+}
+
+// Fault drill: a panic inside the loop (F12 with RHEOSIDE_FAULT_DRILL=panic) gives the
+// terminal back (main screen, not the alternate one) and what was already saved stays on
+// disk; the run has no end record, so a resume reports that it did not end cleanly.
+#[test]
+fn a_panic_gives_the_terminal_back_and_keeps_what_was_saved() {
+    let logs = tempfile::tempdir().expect("a temp dir");
+    let log_dir = logs.path().to_str().expect("a UTF-8 path");
+    let args = ["--log-dir", log_dir, "--operator", "e2e"];
+    let mut s = Session::start_on(
+        &args,
+        "xterm-256color",
+        &[("RHEOSIDE_FAULT_DRILL", "panic")],
+    );
+    s.wait_for("Sample point (equipment)");
+    s.send("nline L-1 warm to the touch\r");
+    s.wait_for("journal saved");
+    assert!(s.alternate_screen());
+    s.send("\x1b[24~"); // F12
+    let status = s.wait_exit();
+    assert!(!status.success(), "a panic is not a clean exit");
+    assert!(!s.alternate_screen(), "the terminal was given back");
+    let journal = load(&journal_in(logs.path())).expect("the journal reads back");
+    let kinds: Vec<&str> = journal.records.iter().map(|r| r.payload.kind()).collect();
+    assert_eq!(kinds, ["session-start", "note"]);
 }
 
 #[test]

@@ -69,6 +69,7 @@ fn run_loop(
 ) -> anyhow::Result<()> {
     let mut dirty = true;
     let mut shown_second = None;
+    let drill = panic_drill();
     while app.state() == RunState::Running {
         if stop.is_set() {
             app.force_quit();
@@ -89,6 +90,9 @@ fn run_loop(
             Some(Input::Key(key)) => {
                 app.on_key(&key);
                 dirty = true;
+                if drill && key.code == ratatui::crossterm::event::KeyCode::F(12) {
+                    panic!("fault drill: a panic on F12 (RHEOSIDE_FAULT_DRILL=panic)");
+                }
             }
             Some(Input::Resize) => dirty = true,
             Some(Input::HangUp) => {
@@ -100,6 +104,13 @@ fn run_loop(
     }
     pump_journal(app, link);
     Ok(())
+}
+
+/// The fault drill of the test suite: with `RHEOSIDE_FAULT_DRILL=panic`, F12 panics inside
+/// the loop, so a test can check that a panic gives the terminal back (the panic hook and the
+/// guard's drop). Off unless that variable is set; nothing else reads it.
+fn panic_drill() -> bool {
+    std::env::var("RHEOSIDE_FAULT_DRILL").is_ok_and(|v| v == "panic")
 }
 
 /// Hand new records to the writer thread and take in its answers; true if anything changed.
