@@ -249,7 +249,7 @@ pub mod curve {
     pub const LEGEND_FLAGGED: &str = "flagged";
     pub const LEGEND_FIT: &str = "fit";
     pub const MODEL_TITLE: &str = " Model ";
-    pub const NO_SET: &str = "No set yet: enter one on the Readings view and press s.";
+    pub const NO_SET: &str = "No set yet: enter one on the Readings view and save it (Ctrl-S).";
     pub const FIT_FAILED: &str = "No fit";
     pub const AUTO: &str = "auto";
     pub const BY_HAND: &str = "by hand";
