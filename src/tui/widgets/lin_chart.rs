@@ -136,18 +136,12 @@ impl LinChart<'_> {
     }
 
     fn draw_axes(&self, area: Rect, plot: &Plot, buf: &mut Buffer) {
-        let m = &self.theme.marks;
-        let style = self.theme.axis;
-        let axis_col = plot.0.x.saturating_sub(1);
-        let axis_row = plot.0.bottom();
-        for row in plot.0.y..plot.0.bottom() {
-            buf.set_string(axis_col, row, m.axis_v.to_string(), style);
-        }
-        for col in plot.0.x..plot.0.right() {
-            buf.set_string(col, axis_row, m.axis_h.to_string(), style);
-        }
-        buf.set_string(axis_col, axis_row, m.axis_corner.to_string(), style);
-        buf.set_string(area.x, area.y, self.y_unit, style);
+        super::axis_frame(buf, area, plot.0, self.theme, self.y_unit);
+        let (m, style, axis_col) = (
+            &self.theme.marks,
+            self.theme.axis,
+            plot.0.x.saturating_sub(1),
+        );
         let mut last_row = None;
         for v in self.y_ticks(area) {
             let Some(fy) = self.y.fraction(v) else {
