@@ -284,21 +284,7 @@ fn sample_curve(curve: &FlowCurve, x: LogRange) -> Vec<(f64, f64)> {
 }
 
 impl View for CurveView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::CURVE
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::CURVE
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::CURVE, caution::CURVE, KEYS);
 
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {

@@ -116,21 +116,7 @@ fn entry_line(e: &Entry, t: &Theme, style: crate::present::Style) -> Line<'stati
 }
 
 impl View for JournalView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::JOURNAL
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::JOURNAL
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::JOURNAL, caution::JOURNAL, KEYS);
 
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {

@@ -92,21 +92,7 @@ pub fn line_for(site: &Site, picked: Option<&str>) -> Option<String> {
 }
 
 impl View for LineView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::LINE
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::LINE
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::LINE, caution::LINE, KEYS);
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         match action {

@@ -87,6 +87,28 @@ pub trait View {
     }
 }
 
+/// A view's fixed identity inside its `impl View`: its id, tab name, caution line and key
+/// table, when all four are constants (views whose keys follow their state write `keys`).
+macro_rules! view_identity {
+    ($id:expr, $title:expr, $caution:expr, $keys:expr) => {
+        fn id(&self) -> ViewId {
+            $id
+        }
+
+        fn title(&self) -> &'static str {
+            $title
+        }
+
+        fn caution(&self) -> &'static str {
+            $caution
+        }
+
+        fn keys(&self) -> &'static [Binding] {
+            $keys
+        }
+    };
+}
+
 /// Declares each view's module and builds them all in tab order.
 macro_rules! views {
     ($($module:ident :: $view:ident),* $(,)?) => {

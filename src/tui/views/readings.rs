@@ -334,21 +334,7 @@ fn draft(payload: Payload, equipment: Option<String>) -> Draft {
 }
 
 impl View for ReadingsView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::READINGS
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::READINGS
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::READINGS, caution::READINGS, KEYS);
 
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {

@@ -434,21 +434,7 @@ fn result_draft(
 }
 
 impl View for RestartView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::RESTART
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::RESTART
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::RESTART, caution::RESTART, KEYS);
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         if self.form.focus.is_field() {

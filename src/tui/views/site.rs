@@ -170,21 +170,7 @@ fn clean(text: &str) -> String {
 }
 
 impl View for SiteView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::SITE
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::SITE
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::SITE, caution::SITE, KEYS);
 
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {

@@ -346,21 +346,7 @@ fn draft(payload: Payload, equipment: &str) -> Draft {
 }
 
 impl View for SpotView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::SPOT
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::SPOT
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::SPOT, caution::SPOT, KEYS);
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         self.follow_pick(ctx);

@@ -339,21 +339,7 @@ fn result_draft(d: &TankLive, from: Vec<u64>) -> Draft {
 }
 
 impl View for TankView {
-    fn id(&self) -> ViewId {
-        ID
-    }
-
-    fn title(&self) -> &'static str {
-        names::TANK
-    }
-
-    fn caution(&self) -> &'static str {
-        caution::TANK
-    }
-
-    fn keys(&self) -> &'static [Binding] {
-        KEYS
-    }
+    view_identity!(ID, names::TANK, caution::TANK, KEYS);
 
     fn handle(&mut self, action: Action, ctx: &Ctx) -> Vec<Effect> {
         if self.form.focus.is_field() {
