@@ -5,6 +5,7 @@
 //! the choice rule in `choose`, the temperature shift in `temperature`). Conventions for
 //! R², RMSE, AICc and the intervals are in [`stats`].
 
+pub mod band;
 mod choose;
 mod data;
 mod error;

@@ -21,6 +21,32 @@ pub enum Model {
 }
 
 impl Model {
+    /// The model with parameter `index` (in `param_names` order) set to `value`.
+    pub fn with_param(self, index: usize, value: f64) -> Model {
+        let mut v = self.params().iter().map(|(_, x)| *x).collect::<Vec<f64>>();
+        if let Some(slot) = v.get_mut(index) {
+            *slot = value;
+        }
+        let at = |i: usize| v.get(i).copied().unwrap_or(0.0);
+        match self {
+            Model::Newtonian { .. } => Model::Newtonian { mu: at(0) },
+            Model::PowerLaw { .. } => Model::PowerLaw { k: at(0), n: at(1) },
+            Model::Bingham { .. } => Model::Bingham {
+                tau0: at(0),
+                mu_p: at(1),
+            },
+            Model::HerschelBulkley { .. } => Model::HerschelBulkley {
+                tau0: at(0),
+                k: at(1),
+                n: at(2),
+            },
+            Model::Casson { .. } => Model::Casson {
+                tau0: at(0),
+                mu_c: at(1),
+            },
+        }
+    }
+
     pub fn kind(&self) -> ModelKind {
         match self {
             Model::Newtonian { .. } => ModelKind::Newtonian,

@@ -2,6 +2,7 @@
 //! build-up against rest time with the pump's limit, a tank's power curve with today's point.
 
 use super::svg::{Chart, Mark, Scale, escape, render};
+use crate::rheology::band::stress_band;
 use crate::session::findings_equipment::{restart_answers, tank_answers};
 use crate::session::restart_chart::chart;
 use crate::session::state::{Entry, SessionState, ViscometerSet};
@@ -44,15 +45,17 @@ pub(crate) fn set_chart(e: &Entry<ViscometerSet>) -> String {
             let mut marks = Vec::new();
             if lo.is_finite() && hi > lo {
                 let xs = log_spaced(lo / 1.5, hi * 1.5, CURVE_POINTS);
-                let spread = 2.0 * c.fit.rmse_pa;
-                marks.push(Mark::Band(
-                    xs.iter()
-                        .map(|&x| {
-                            let y = c.fit.model.stress(x);
-                            (x, (y - spread).max(y * 0.05), y + spread)
-                        })
-                        .collect(),
-                ));
+                let band: Vec<(f64, f64, f64)> = xs
+                    .iter()
+                    .filter_map(|&x| {
+                        let (lo, hi) = stress_band(&c.fit, x)?;
+                        // Log axes: keep the band's floor above zero.
+                        Some((x, lo.max(c.fit.model.stress(x) * 0.05), hi))
+                    })
+                    .collect();
+                if !band.is_empty() {
+                    marks.push(Mark::Band(band));
+                }
                 marks.push(Mark::Line {
                     xy: xs.iter().map(|&x| (x, c.fit.model.stress(x))).collect(),
                     dashed: false,
@@ -68,7 +71,7 @@ pub(crate) fn set_chart(e: &Entry<ViscometerSet>) -> String {
                 marks,
             };
             let caption = format!(
-                "Points: the readings; line: the {} fit (R² {:.3}); shaded: ±2 RMSE, the scatter of the readings about it.",
+                "Points: the readings; line: the {} fit (R² {:.3}); shaded: the fit's 95 % confidence band for the curve (the parameters' covariance carried through, Student t), where it has one.",
                 c.fit.model.kind().name(),
                 c.fit.r_squared
             );
