@@ -34,6 +34,7 @@ pub mod rheology_shift;
 pub mod rheology_source;
 pub mod spot;
 pub mod state;
+mod state_fit;
 pub mod tank;
 pub mod tank_input;
 pub mod tank_json;
