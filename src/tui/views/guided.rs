@@ -14,7 +14,6 @@ use crate::readings::parse_reading_arg_at;
 use crate::session::guided::{self, CHECKS, Check, Outcome, Target};
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b};
-use crate::tui::session_log::summarize;
 use crate::tui::strings::guided as s;
 use crate::tui::widgets::editing::{self, EditStep, Leave};
 use crate::tui::widgets::field::{Field, FieldKind};
@@ -69,14 +68,6 @@ pub struct GuidedView {
     closing: Option<Closing>,
     /// The message under the step or the list (a refusal, or what just happened).
     message: Option<String>,
-}
-
-fn draft(payload: Payload, equipment: Option<String>) -> Draft {
-    Draft {
-        summary: summarize(&payload, equipment.as_deref()),
-        equipment,
-        payload,
-    }
 }
 
 impl Walk {
@@ -180,7 +171,7 @@ impl GuidedView {
         let equipment = walk.target.equipment(step.at).map(str::to_string);
         self.outstanding
             .push((equipment.clone(), parsed.payload()));
-        let mut effects = vec![Effect::Journal(draft(parsed.payload(), equipment))];
+        let mut effects = vec![Effect::Journal(Draft::new(parsed.payload(), equipment))];
         if let Some(note) = parsed.conversion_note() {
             effects.push(Effect::Status(note));
         }
@@ -222,7 +213,7 @@ impl GuidedView {
             target: walk.target,
         });
         vec![
-            Effect::Journal(draft(note, equipment)),
+            Effect::Journal(Draft::new(note, equipment)),
             Effect::Status(s::FINISHED.to_string()),
             Effect::Show(super::findings::ID),
         ]
@@ -321,7 +312,7 @@ impl View for GuidedView {
             .collect();
         let text = guided::findings_note(c.check, &c.target, &headlines);
         let equipment = c.target.line.clone().or(c.target.tank.clone());
-        vec![Effect::Journal(draft(Payload::Note { text }, equipment))]
+        vec![Effect::Journal(Draft::new(Payload::Note { text }, equipment))]
     }
 
     fn render(&self, frame: &mut Frame, area: Rect, ctx: &Ctx) {

@@ -34,6 +34,17 @@ pub struct Draft {
     pub summary: String,
 }
 
+impl Draft {
+    /// A record about `equipment` (if any), with its Journal-view line.
+    pub fn new(payload: Payload, equipment: Option<String>) -> Draft {
+        Draft {
+            summary: super::session_log::summarize(&payload, equipment.as_deref()),
+            equipment,
+            payload,
+        }
+    }
+}
+
 /// What a view asks the app to do after handling a key.
 #[derive(Debug, Clone, PartialEq)]
 pub enum Effect {

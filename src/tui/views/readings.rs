@@ -15,7 +15,6 @@ use crate::rheology::ModelKind;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b, h};
-use crate::tui::session_log::summarize;
 use crate::tui::strings::readings as s;
 use crate::tui::strings::{caution, keys, views as names};
 use crate::tui::widgets::editing::{self, EditStep, Leave};
@@ -313,9 +312,9 @@ fn drafts(
         temperature_k: checked.temperature.as_ref().map(|t| t.1),
         rows: checked.rows.clone(),
     };
-    let mut out = vec![draft(set, equipment.clone())];
+    let mut out = vec![Draft::new(set, equipment.clone())];
     if let Some(text) = &checked.notes {
-        out.push(draft(
+        out.push(Draft::new(
             Payload::Note {
                 text: sanitize(text, false),
             },
@@ -323,14 +322,6 @@ fn drafts(
         ));
     }
     out
-}
-
-fn draft(payload: Payload, equipment: Option<String>) -> Draft {
-    Draft {
-        summary: summarize(&payload, equipment.as_deref()),
-        equipment,
-        payload,
-    }
 }
 
 impl View for ReadingsView {

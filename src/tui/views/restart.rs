@@ -19,7 +19,6 @@ use crate::session::restart_chart::{RestartChart, chart};
 use crate::site::{Line, Pump, Site};
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b};
-use crate::tui::session_log::summarize;
 use crate::tui::strings::restart as s;
 use crate::tui::strings::{caution, keys, views as names};
 use crate::tui::widgets::editing::{self, EditStep, Leave};
@@ -257,7 +256,7 @@ impl RestartView {
         let equipment = Some(question.line.clone());
         let mut effects: Vec<Effect> = want
             .iter()
-            .map(|(_, p)| Effect::Journal(draft(p.clone(), equipment.clone())))
+            .map(|(_, p)| Effect::Journal(Draft::new(p.clone(), equipment.clone())))
             .collect();
         self.pending = Some(Pending {
             question,
@@ -403,14 +402,6 @@ fn payloads(c: &CheckedForm) -> Vec<(Role, Payload)> {
     out
 }
 
-fn draft(payload: Payload, equipment: Option<String>) -> Draft {
-    Draft {
-        summary: summarize(&payload, equipment.as_deref()),
-        equipment,
-        payload,
-    }
-}
-
 /// The answer as a restart result linked to the readings, in the `restart --json` shape
 /// plus the line, pump and product it is about.
 fn result_draft(
@@ -430,7 +421,7 @@ fn result_draft(
         from,
         data,
     };
-    draft(payload, Some(q.line.clone()))
+    Draft::new(payload, Some(q.line.clone()))
 }
 
 impl View for RestartView {

@@ -15,7 +15,6 @@ use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b, h};
 use crate::tui::layout::{clip_words, row};
-use crate::tui::session_log::summarize;
 use crate::tui::strings::spot as s;
 use crate::tui::strings::{caution, keys, views as names};
 use crate::tui::widgets::editing::{self, EditStep, Leave};
@@ -338,11 +337,7 @@ fn unit_hint(kind: &ReadingKind) -> String {
 }
 
 fn draft(payload: Payload, equipment: &str) -> Draft {
-    Draft {
-        summary: summarize(&payload, Some(equipment)),
-        equipment: Some(equipment.to_string()),
-        payload,
-    }
+    Draft::new(payload, Some(equipment.to_string()))
 }
 
 impl View for SpotView {

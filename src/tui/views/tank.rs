@@ -21,7 +21,6 @@ use crate::site::{Site, Tank};
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
 use crate::tui::keymap::{Action, Binding, Key, Scope, b};
-use crate::tui::session_log::summarize;
 use crate::tui::strings::tank as s;
 use crate::tui::strings::{caution, keys, views as names};
 use crate::tui::widgets::editing::{self, EditStep, Leave};
@@ -225,7 +224,7 @@ impl TankView {
         let equipment = Some(tank.id.clone());
         let mut effects: Vec<Effect> = want
             .iter()
-            .map(|p| Effect::Journal(draft(p.clone(), equipment.clone())))
+            .map(|p| Effect::Journal(Draft::new(p.clone(), equipment.clone())))
             .collect();
         self.pending = Some(Pending {
             tank: tank.id.clone(),
@@ -291,14 +290,6 @@ fn payload(t: &TypedReading) -> Option<Payload> {
     })
 }
 
-fn draft(payload: Payload, equipment: Option<String>) -> Draft {
-    Draft {
-        summary: summarize(&payload, equipment.as_deref()),
-        equipment,
-        payload,
-    }
-}
-
 /// "Answer for TK-1 journalled: motor at 53 %, gearbox at 47 % of its limit."
 fn journalled_status(d: &TankLive) -> String {
     let op = &d.answer.operating;
@@ -335,7 +326,7 @@ fn result_draft(d: &TankLive, from: Vec<u64>) -> Draft {
         from,
         data,
     };
-    draft(payload, Some(d.tank_id.clone()))
+    Draft::new(payload, Some(d.tank_id.clone()))
 }
 
 impl View for TankView {
