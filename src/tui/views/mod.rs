@@ -10,6 +10,7 @@ mod readings_draw;
 mod readings_form;
 mod restart_draw;
 pub mod restart_form;
+mod restart_journal;
 mod tank_draw;
 pub mod tank_form;
 mod tank_sketch;
