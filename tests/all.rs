@@ -8,6 +8,7 @@ mod cli_fit;
 mod cli_mix;
 mod cli_restart;
 mod fit_truth;
+mod fuzz_regressions;
 mod help_examples;
 mod hub;
 mod instrument;

@@ -21,6 +21,11 @@ pub enum LineError {
          even at {flow_m3_s} m3/s"
     )]
     NoRoot { target_pa: f64, flow_m3_s: f64 },
+    #[error(
+        "these inputs are beyond what can be computed in double precision (the {what} came out \
+         as {value}); check the units of the flow, the bore, the length and the flow curve"
+    )]
+    OutOfRange { what: &'static str, value: f64 },
     #[error("a system curve needs two or more points, got {got}")]
     TooFewPoints { got: usize },
     #[error("back-calculation needs {need}, got {got}")]

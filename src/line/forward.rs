@@ -21,7 +21,23 @@ pub fn pressure_drop(pipe: &Pipe, fluid: &Fluid, flow_m3_s: f64) -> Result<LineA
     pipe.check()?;
     fluid.check()?;
     positive("flow", flow_m3_s)?;
-    Ok(evaluate(pipe, fluid, flow_m3_s))
+    finite_answer(evaluate(pipe, fluid, flow_m3_s))
+}
+
+/// An answer is given only when its numbers are finite: inputs far outside plant sizes
+/// (a subnormal flow, a 5 km bore) can underflow or overflow on the way (found by fuzzing).
+fn finite_answer(a: LineAnswer) -> Result<LineAnswer, LineError> {
+    for (what, value) in [
+        ("pressure drop", a.pressure_drop_pa),
+        ("wall shear stress", a.wall_shear_stress_pa),
+        ("Reynolds number", a.reynolds),
+        ("friction factor", a.fanning_friction),
+    ] {
+        if !value.is_finite() {
+            return Err(LineError::OutOfRange { what, value });
+        }
+    }
+    Ok(a)
 }
 
 /// The laminar state at a flow: wall stress, nominal and true wall shear rate, n′, Re_MR.

@@ -8,6 +8,11 @@ use super::impeller::ImpellerKind;
 pub enum MixError {
     #[error("the {what} must be a finite number above zero, got {value}")]
     NotPositive { what: &'static str, value: f64 },
+    #[error(
+        "these inputs are beyond what can be computed in double precision (the {what} came out \
+         as {value}); check the units of the speed, the impeller and the flow curve"
+    )]
+    OutOfRange { what: &'static str, value: f64 },
 
     #[error("the {what} must be above 0 and at most 1 (e.g. 0.85), got {value}")]
     NotAFraction { what: &'static str, value: f64 },

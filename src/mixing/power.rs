@@ -135,6 +135,18 @@ pub fn point_on(shape: &Shape, d: f64, fluid: &Fluid, speed_rps: f64) -> Result<
     let reynolds = rho * n * d * d / mu;
     let np = shape.power_number(reynolds);
     let power = np * rho * n.powi(3) * d.powi(5);
+    // Inputs far outside plant sizes (a subnormal speed, a 5 km impeller) can underflow or
+    // overflow on the way (found by fuzzing): no answer then, rather than inf or NaN.
+    for (what, value) in [
+        ("Reynolds number", reynolds),
+        ("power number", np),
+        ("power", power),
+        ("torque", power / (2.0 * PI * n)),
+    ] {
+        if !value.is_finite() {
+            return Err(MixError::OutOfRange { what, value });
+        }
+    }
     Ok(Point {
         speed_rps: n,
         effective_shear_rate_per_s: rate,
