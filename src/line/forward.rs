@@ -26,7 +26,7 @@ pub fn pressure_drop(pipe: &Pipe, fluid: &Fluid, flow_m3_s: f64) -> Result<LineA
 
 /// An answer is given only when its numbers are finite: inputs far outside plant sizes
 /// (a subnormal flow, a 5 km bore) can underflow or overflow on the way (found by fuzzing).
-fn finite_answer(a: LineAnswer) -> Result<LineAnswer, LineError> {
+pub(super) fn finite_answer(a: LineAnswer) -> Result<LineAnswer, LineError> {
     for (what, value) in [
         ("pressure drop", a.pressure_drop_pa),
         ("wall shear stress", a.wall_shear_stress_pa),

@@ -57,7 +57,13 @@ pub fn flow_for_pressure(
     }
     let g = |q: f64| evaluate(pipe, fluid, q).pressure_drop_pa - pressure_drop_pa;
     let q = bisect(q_laminar * 1e-12, q_laminar * (1.0 + 1e-9), g);
-    let answer = evaluate(pipe, fluid, q);
+    if !q.is_finite() {
+        return Err(LineError::OutOfRange {
+            what: "flow",
+            value: q,
+        });
+    }
+    let answer = super::forward::finite_answer(evaluate(pipe, fluid, q))?;
     Ok(FlowAnswer {
         flow_m3_s: q,
         notes: answer.notes.clone(),
