@@ -384,3 +384,57 @@ fn options_of_the_screens_are_refused_by_the_subcommands() {
         "nothing was journalled"
     );
 }
+
+// A journal of another site is refused on resume before anything is written to it (the
+// resume record used to be appended first, then the site compared).
+#[test]
+fn resuming_another_sites_journal_is_refused_and_leaves_the_file_as_it_was() {
+    use rheoside::journal::{JournalWriter, NewSession, Payload as P};
+    let dir = tempfile::tempdir().expect("a temp dir");
+    let new = NewSession {
+        log_dir: dir.path().to_path_buf(),
+        site_id: "marrowdale-u4".into(),
+        site_source: "bundled demo site (invented plant)".into(),
+        operator: "ana".into(),
+    };
+    let mut w =
+        JournalWriter::create(&new, Box::new(rheoside::journal::SystemClock)).expect("a journal");
+    w.append(
+        None,
+        P::Note {
+            text: "before".into(),
+        },
+    )
+    .expect("saved");
+    let path = w.path().expect("a file").to_path_buf();
+    drop(w);
+    let before = std::fs::read(&path).expect("readable");
+    let other = rheoside::site::DEMO_TOML.replace("id = \"marrowdale-u4\"", "id = \"other-site\"");
+    assert_ne!(
+        other,
+        rheoside::site::DEMO_TOML,
+        "the demo's site id moved; update this test"
+    );
+    let site = write(dir.path(), "other.toml", &other);
+    let opts = rheoside::tui::TuiOptions {
+        site: Some(site),
+        resume: Some(path.clone()),
+        log_dir: None,
+        operator: Some("bo".into()),
+        ascii: false,
+    };
+    let refused = startup::prepare(&opts);
+    let message = match refused {
+        Err(e) => format!("{e:#}"),
+        Ok(_) => panic!("resuming another site's journal was accepted"),
+    };
+    assert!(
+        message.contains("was written for site 'marrowdale-u4'"),
+        "{message}"
+    );
+    assert_eq!(
+        std::fs::read(&path).expect("readable"),
+        before,
+        "the journal was changed"
+    );
+}

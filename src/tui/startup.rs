@@ -76,10 +76,11 @@ pub fn prepare(cli: &TuiOptions) -> anyhow::Result<Result<Start, ExitCode>> {
         app.apply_saved(&writer.take_numbered());
         return Ok(Ok(Start { app, writer }));
     };
-    let mut resumed = JournalWriter::resume(resume, &operator, Box::new(SystemClock))
+    // The site is checked on a read-only load first: a journal of another site is refused
+    // before resuming writes anything to it (the resume record, a torn tail set aside).
+    let peek = crate::journal::load(resume)
         .with_context(|| format!("cannot resume {}", resume.display()))?;
-    let loaded = resumed.loaded;
-    if let Some(id) = loaded.site_id()
+    if let Some(id) = peek.site_id()
         && id != site.id
     {
         bail!(
@@ -89,6 +90,9 @@ pub fn prepare(cli: &TuiOptions) -> anyhow::Result<Result<Start, ExitCode>> {
             site.id
         );
     }
+    let mut resumed = JournalWriter::resume(resume, &operator, Box::new(SystemClock))
+        .with_context(|| format!("cannot resume {}", resume.display()))?;
+    let loaded = resumed.loaded;
     let path = resume.display().to_string();
     let mut app = app_for(site, resumed.writer.operator(), theme, now, &path);
     app.resume_from(&loaded.records);
