@@ -23,6 +23,23 @@ use crate::journal::{Payload, Record};
 use ratatui::Frame;
 use ratatui::layout::Rect;
 
+/// The keys of a view that is one form of fields owning their keys: Ctrl-S saves from
+/// anywhere, Enter saves on the Save line (else goes to the next field).
+pub const FORM_KEYS: &[Binding] = &[
+    super::keymap::b(
+        super::keymap::Scope::ViewTyping,
+        &[super::keymap::Key::Ctrl('s')],
+        Action::Save,
+        super::strings::keys::SAVE_FORM,
+    ),
+    super::keymap::b(
+        super::keymap::Scope::View,
+        &[super::keymap::Key::Enter],
+        Action::Activate,
+        super::strings::keys::SAVE_OR_NEXT,
+    ),
+];
+
 /// Which view: a short name, used to scope keys, switch views and in tests.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub struct ViewId(pub &'static str);

@@ -206,18 +206,8 @@ fn draw_field(
         _ if field.error().is_some() => t.error,
         _ => t.field,
     };
-    if let Some(pos) = field.render(area, frame.buffer_mut(), style, selected && editing) {
-        frame.set_cursor_position(pos);
-    }
-    if field.error().is_some() {
-        let mark = Rect {
-            x: area.right(),
-            width: 1,
-            ..area
-        }
-        .intersection(line);
-        frame.render_widget(Paragraph::new("!").style(t.error), mark);
-    }
+    let editing = selected && editing;
+    crate::tui::widgets::field::draw_in_form(frame, (area, line), field, style, editing, t.error);
 }
 
 fn draw_si(frame: &mut Frame, line: Rect, x: u16, field: &Field, t: &Theme) {

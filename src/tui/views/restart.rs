@@ -16,9 +16,9 @@ use crate::session::restart::{self, GelSource, RestartAnswer, RestartSetupError}
 use crate::session::restart_chart::{RestartChart, chart};
 use crate::site::{Line, Pump, Site};
 use crate::tui::ctx::Ctx;
-use crate::tui::keymap::{Action, Binding, Key, Scope, b};
+use crate::tui::keymap::{Action, Binding};
 use crate::tui::strings::restart as s;
-use crate::tui::strings::{caution, keys, views as names};
+use crate::tui::strings::{caution, views as names};
 use crate::tui::widgets::editing::{self, EditStep, Leave};
 use ratatui::Frame;
 use ratatui::layout::Rect;
@@ -27,20 +27,7 @@ use ratatui::layout::Rect;
 pub const ID: ViewId = ViewId("restart");
 
 /// The Restart view's own keys; the fields own every other printable key.
-const KEYS: &[Binding] = &[
-    b(
-        Scope::ViewTyping,
-        &[Key::Ctrl('s')],
-        Action::Save,
-        keys::SAVE_FORM,
-    ),
-    b(
-        Scope::View,
-        &[Key::Enter],
-        Action::Activate,
-        keys::SAVE_OR_NEXT,
-    ),
-];
+const KEYS: &[Binding] = super::FORM_KEYS;
 
 /// Points along the gel curve: more than the widest chart has columns.
 const CHART_POINTS: usize = 160;

@@ -16,6 +16,7 @@ use crate::tui::layout::{clip_end, row};
 use crate::tui::strings::restart as s;
 use crate::tui::theme::Glyphs;
 use crate::tui::widgets::field::Field;
+use crate::tui::widgets::field::draw_in_form;
 use crate::tui::widgets::lin_chart::{Level, LinChart, LinRange, Series};
 use crate::units::{self, Dimension};
 use ratatui::Frame;
@@ -159,18 +160,7 @@ impl RestartScreen<'_> {
             false if field.error().is_some() => t.error,
             false => t.field,
         };
-        if let Some(pos) = field.render(area, frame.buffer_mut(), style, selected) {
-            frame.set_cursor_position(pos);
-        }
-        if field.error().is_some() {
-            let mark = Rect {
-                x: area.right(),
-                width: 1,
-                ..area
-            }
-            .intersection(line);
-            frame.render_widget(Paragraph::new("!").style(t.error), mark);
-        }
+        draw_in_form(frame, (area, line), field, style, selected, t.error);
     }
 
     /// The focused field's problem, else the last message, else the hint.

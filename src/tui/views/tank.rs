@@ -20,9 +20,9 @@ use crate::session::tank_words;
 use crate::site::{Site, Tank};
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
-use crate::tui::keymap::{Action, Binding, Key, Scope, b};
+use crate::tui::keymap::{Action, Binding};
 use crate::tui::strings::tank as s;
-use crate::tui::strings::{caution, keys, views as names};
+use crate::tui::strings::{caution, views as names};
 use crate::tui::widgets::editing::{self, EditStep, Leave};
 use ratatui::Frame;
 use ratatui::layout::Rect;
@@ -33,20 +33,7 @@ use std::f64::consts::PI;
 pub const ID: ViewId = ViewId("tank");
 
 /// The Tank view's own keys; the fields own every other printable key.
-const KEYS: &[Binding] = &[
-    b(
-        Scope::ViewTyping,
-        &[Key::Ctrl('s')],
-        Action::Save,
-        keys::SAVE_FORM,
-    ),
-    b(
-        Scope::View,
-        &[Key::Enter],
-        Action::Activate,
-        keys::SAVE_OR_NEXT,
-    ),
-];
+const KEYS: &[Binding] = super::FORM_KEYS;
 
 /// Readings sent to the journal, waiting to come back numbered.
 #[derive(Debug, Clone, PartialEq)]

@@ -14,6 +14,7 @@ use crate::tui::layout::{clip_end, row};
 use crate::tui::strings::tank as s;
 use crate::tui::theme::Glyphs;
 use crate::tui::widgets::field::Field;
+use crate::tui::widgets::field::draw_in_form;
 use crate::tui::widgets::log_axis::LogRange;
 use crate::tui::widgets::log_chart::{LogChart, Mark};
 use crate::units;
@@ -164,18 +165,7 @@ impl TankScreen<'_> {
             false if field.error().is_some() => t.error,
             false => t.field,
         };
-        if let Some(pos) = field.render(area, frame.buffer_mut(), style, selected) {
-            frame.set_cursor_position(pos);
-        }
-        if field.error().is_some() {
-            let mark = Rect {
-                x: area.right(),
-                width: 1,
-                ..area
-            }
-            .intersection(line);
-            frame.render_widget(Paragraph::new("!").style(t.error), mark);
-        }
+        draw_in_form(frame, (area, line), field, style, selected, t.error);
     }
 
     /// The form is as tall as its message needs (a long one takes rows from the side view,

@@ -275,6 +275,34 @@ pub fn check(kind: FieldKind, text: &str) -> Checked {
     }
 }
 
+/// Draw a form's field in `area` (clipped to `line`) with `style`, put the cursor in it when
+/// `editing`, and mark a field whose content is wrong with "!" just after it: the same in
+/// every form.
+pub fn draw_in_form(
+    frame: &mut ratatui::Frame,
+    (area, line): (Rect, Rect),
+    field: &Field,
+    style: Style,
+    editing: bool,
+    error_style: Style,
+) {
+    if let Some(pos) = field.render(area, frame.buffer_mut(), style, editing) {
+        frame.set_cursor_position(pos);
+    }
+    if field.error().is_some() {
+        let mark = Rect {
+            x: area.right(),
+            width: 1,
+            ..area
+        }
+        .intersection(line);
+        frame.render_widget(
+            ratatui::widgets::Paragraph::new("!").style(error_style),
+            mark,
+        );
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
