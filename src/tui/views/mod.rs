@@ -8,6 +8,7 @@ mod guided_draw;
 mod line_draw;
 mod readings_draw;
 mod readings_form;
+mod readings_preview;
 mod restart_draw;
 pub mod restart_form;
 mod restart_journal;

@@ -1,7 +1,8 @@
 //! Drawing the viscometer-set form: picks, viscometer, temperature, the reading table with
 //! what each row will store, notes, and the message for the selected field.
 
-use super::readings_form::{Focus, Form, RowPreview};
+use super::readings_form::{Focus, Form};
+use super::readings_preview::RowPreview;
 use crate::present;
 use crate::text::sanitize;
 use crate::tui::ctx::Ctx;
