@@ -4,6 +4,7 @@
 //! the report; options of the screens are refused by the subcommands.
 
 use crate::support;
+use crate::support::{press, type_text};
 use assert_cmd::Command;
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
@@ -42,16 +43,6 @@ fn app_on(site: Site) -> App {
     let now = chrono::DateTime::parse_from_rfc3339("2026-12-01T08:00:00+01:00").expect("time");
     let theme = Theme::new(ColourMode::Plain, Glyphs::Unicode);
     startup::app_for(site, "ana", theme, now, "logs/test.jsonl")
-}
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::new(code, KeyModifiers::NONE));
-}
-
-fn type_text(app: &mut App, text: &str) {
-    for c in text.chars() {
-        press(app, KeyCode::Char(c));
-    }
 }
 
 /// Pick TK-1 and its product, type the six dials, save: the records the journal numbers.

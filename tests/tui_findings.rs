@@ -3,21 +3,18 @@
 //! at 80×24 (and in ASCII), Enter opening one finding in full, Esc back.
 
 use crate::support;
+use crate::support::press;
 
 use chrono::Utc;
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
-use ratatui::crossterm::event::{KeyCode, KeyEvent};
+use ratatui::crossterm::event::KeyCode;
 use rheoside::diagnose::{Rule, Severity};
 use rheoside::journal::{Payload, Record};
 use rheoside::tui::app::App;
 use rheoside::tui::render;
 use rheoside::tui::theme::{ColourMode, Glyphs};
 use rheoside::tui::views;
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::from(code));
-}
 
 fn screen(app: &App) -> String {
     let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");

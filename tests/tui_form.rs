@@ -5,6 +5,7 @@
 //! cursor went, short sets ask before saving, and each row's checks show while it is typed.
 
 use crate::support;
+use crate::support::{ctrl, press, type_text};
 
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
@@ -18,20 +19,6 @@ use rheoside::tui::views;
 
 fn app() -> App {
     support::demo_app(ColourMode::Plain, Glyphs::Unicode, "ana", "logs/test.jsonl")
-}
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::new(code, KeyModifiers::NONE));
-}
-
-fn ctrl(app: &mut App, c: char) {
-    app.on_key(&KeyEvent::new(KeyCode::Char(c), KeyModifiers::CONTROL));
-}
-
-fn type_text(app: &mut App, text: &str) {
-    for c in text.chars() {
-        press(app, KeyCode::Char(c));
-    }
 }
 
 fn screen(app: &App) -> String {

@@ -4,10 +4,11 @@
 //! findings that follow. Screens at 80×24 as snapshots, and in ASCII.
 
 use crate::support;
+use crate::support::{ctrl, press, type_text};
 
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
-use ratatui::crossterm::event::{KeyCode, KeyEvent, KeyModifiers};
+use ratatui::crossterm::event::KeyCode;
 use rheoside::diagnose::Rule;
 use rheoside::journal::{Payload, Record};
 use rheoside::session::findings::findings;
@@ -16,20 +17,6 @@ use rheoside::tui::keymap::Context;
 use rheoside::tui::render;
 use rheoside::tui::theme::{ColourMode, Glyphs};
 use rheoside::tui::views;
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::from(code));
-}
-
-fn ctrl(app: &mut App, c: char) {
-    app.on_key(&KeyEvent::new(KeyCode::Char(c), KeyModifiers::CONTROL));
-}
-
-fn type_text(app: &mut App, text: &str) {
-    for c in text.chars() {
-        press(app, KeyCode::Char(c));
-    }
-}
 
 fn screen(app: &App) -> String {
     let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");

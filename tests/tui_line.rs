@@ -2,10 +2,11 @@
 //! the what-if keys, and the screen at 80×24 (and in ASCII).
 
 use crate::support;
+use crate::support::press;
 
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
-use ratatui::crossterm::event::{KeyCode, KeyEvent};
+use ratatui::crossterm::event::KeyCode;
 use rheoside::journal::{Payload, Record};
 use rheoside::line::Disagreement;
 use rheoside::session::line::{at_flow, duty_pressure, plant_check, site_case};
@@ -17,10 +18,6 @@ use rheoside::tui::theme::{ColourMode, Glyphs};
 use rheoside::tui::views;
 use rheoside::tui::views::View;
 use rheoside::tui::views::line::{LineShown, LineView, plant_pairs};
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::from(code));
-}
 
 fn screen(app: &App) -> String {
     let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");

@@ -5,10 +5,11 @@
 //! here. Screens at 80×24 as snapshots, and in ASCII mode.
 
 use crate::support;
+use crate::support::{ctrl, press, type_text};
 
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
-use ratatui::crossterm::event::{KeyCode, KeyEvent, KeyModifiers};
+use ratatui::crossterm::event::KeyCode;
 use rheoside::journal::{Payload, Record, ResultKind};
 use rheoside::tui::app::{App, RunState};
 use rheoside::tui::keymap::Context;
@@ -19,20 +20,6 @@ use rheoside::tui::views;
 /// Invented rested-gel readings made exactly from the demo paste's own build-up,
 /// τ(t) = 520 − 400·e^(−t/7200 s) Pa (τi 120 Pa, τ∞ 520 Pa, tr 2 h), at 10 s, 10 min, 30 min.
 const GELS: [&str; 3] = ["120.555", "151.982", "208.480"];
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::from(code));
-}
-
-fn ctrl(app: &mut App, c: char) {
-    app.on_key(&KeyEvent::new(KeyCode::Char(c), KeyModifiers::CONTROL));
-}
-
-fn type_text(app: &mut App, text: &str) {
-    for c in text.chars() {
-        press(app, KeyCode::Char(c));
-    }
-}
 
 fn screen(app: &App) -> String {
     let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");

@@ -4,6 +4,7 @@
 //! finding beside it, so the session state holds it for the line, restart and tank views.
 
 use crate::support;
+use crate::support::{press, type_text};
 
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
@@ -16,16 +17,6 @@ use rheoside::tui::views;
 
 fn app() -> App {
     support::demo_app(ColourMode::Plain, Glyphs::Unicode, "ana", "logs/test.jsonl")
-}
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::new(code, KeyModifiers::NONE));
-}
-
-fn type_text(app: &mut App, text: &str) {
-    for c in text.chars() {
-        press(app, KeyCode::Char(c));
-    }
 }
 
 fn screen(app: &App) -> String {

@@ -5,30 +5,17 @@
 //! snapshots, and in ASCII mode.
 
 use crate::support;
+use crate::support::{ctrl, press, type_text};
 
 use ratatui::Terminal;
 use ratatui::backend::TestBackend;
-use ratatui::crossterm::event::{KeyCode, KeyEvent, KeyModifiers};
+use ratatui::crossterm::event::KeyCode;
 use rheoside::journal::{Payload, Record, ResultKind};
 use rheoside::tui::app::{App, RunState};
 use rheoside::tui::keymap::Context;
 use rheoside::tui::render;
 use rheoside::tui::theme::{ColourMode, Glyphs};
 use rheoside::tui::views;
-
-fn press(app: &mut App, code: KeyCode) {
-    app.on_key(&KeyEvent::from(code));
-}
-
-fn ctrl(app: &mut App, c: char) {
-    app.on_key(&KeyEvent::new(KeyCode::Char(c), KeyModifiers::CONTROL));
-}
-
-fn type_text(app: &mut App, text: &str) {
-    for c in text.chars() {
-        press(app, KeyCode::Char(c));
-    }
-}
 
 fn screen(app: &App) -> String {
     let mut t = Terminal::new(TestBackend::new(80, 24)).expect("a test terminal");

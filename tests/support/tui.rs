@@ -5,6 +5,7 @@
 use chrono::DateTime;
 use portable_pty::{PtyPair, PtySize, native_pty_system};
 use ratatui::buffer::Buffer;
+use ratatui::crossterm::event::{KeyCode, KeyEvent, KeyModifiers};
 use rheoside::journal::{Payload, Record};
 use rheoside::tui::app::App;
 use rheoside::tui::startup;
@@ -13,6 +14,23 @@ use rheoside::tui::writer::Reply;
 use std::io::{self, Write};
 use std::sync::Arc;
 use std::sync::atomic::{AtomicUsize, Ordering};
+
+/// One key press, no modifiers.
+pub fn press(app: &mut App, code: KeyCode) {
+    app.on_key(&KeyEvent::from(code));
+}
+
+/// Ctrl and a letter (Ctrl-S saves a form).
+pub fn ctrl(app: &mut App, c: char) {
+    app.on_key(&KeyEvent::new(KeyCode::Char(c), KeyModifiers::CONTROL));
+}
+
+/// Each character of `text` as a key press.
+pub fn type_text(app: &mut App, text: &str) {
+    for c in text.chars() {
+        press(app, KeyCode::Char(c));
+    }
+}
 
 /// The app on the bundled demo site at a fixed moment, so screens are repeatable, with its
 /// session-start record on disk as the real start-up leaves it.
